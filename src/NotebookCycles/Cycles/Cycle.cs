@@ -101,8 +101,8 @@ internal sealed record Chain(string Title, SystemKind Kind, IPropertyModel Model
 
     public CycleResult Solve() => ChainSolver.Solve(Title, Kind, Model, Options, Start, Specs);
 
-    public Target Target(string what, double? pressureRatio, double? volumeRatio, Pressure? toPressure, SpecificVolume? toVolume, string? toPressureOf, string? toVolumeOf) =>
-        Cycles.Target.From(Title, NextStep(what), pressureRatio, volumeRatio, toPressure?.Pascals, toVolume?.CubicMetersPerKilogram, toPressureOf, toVolumeOf);
+    public Target Target(string what, double? pressureRatio, double? volumeRatio, Pressure? toPressure, SpecificVolume? toVolume, string? toPressureOf, string? toVolumeOf, Temperature? toTemperature = null) =>
+        Cycles.Target.From(Title, NextStep(what), pressureRatio, volumeRatio, toPressure?.Pascals, toVolume?.CubicMetersPerKilogram, toPressureOf, toVolumeOf, toTemperature?.Kelvins);
 
     public (HeatEnd End, double Value) HeatEndOf(string what, bool heating, SpecificEnergy? q, Temperature? toTemperature, Pressure? toPressure, SpecificVolume? toVolume, double? cutoffRatio, double? toQuality)
     {
@@ -142,13 +142,13 @@ public sealed class ClosedCycle
     /// <summary>Starts the chain at a state computed beforehand with the same model.</summary>
     public ClosedCycle Start(State state) => new(Chain.WithStart(state));
 
-    /// <summary>Reversible adiabatic compression; give one end point: volumeRatio r = v1/v2 &gt; 1, pressureRatio p2/p1 &gt; 1, toPressure, toVolume, or an earlier state's pressure or volume.</summary>
-    public ClosedCycle CompressIsentropic(string label, double? volumeRatio = null, double? pressureRatio = null, Pressure? toPressure = null, SpecificVolume? toVolume = null, string? toPressureOf = null, string? toVolumeOf = null) =>
-        new(Chain.Then(new IsentropicSpec(label, true, Chain.Target("isentropic compression", pressureRatio, volumeRatio, toPressure, toVolume, toPressureOf, toVolumeOf))));
+    /// <summary>Reversible adiabatic compression; give one end point: volumeRatio r = v1/v2 &gt; 1, pressureRatio p2/p1 &gt; 1, toPressure, toVolume, an earlier state's pressure or volume, or toTemperature.</summary>
+    public ClosedCycle CompressIsentropic(string label, double? volumeRatio = null, double? pressureRatio = null, Pressure? toPressure = null, SpecificVolume? toVolume = null, string? toPressureOf = null, string? toVolumeOf = null, Temperature? toTemperature = null) =>
+        new(Chain.Then(new IsentropicSpec(label, true, Chain.Target("isentropic compression", pressureRatio, volumeRatio, toPressure, toVolume, toPressureOf, toVolumeOf, toTemperature))));
 
-    /// <summary>Reversible adiabatic expansion; give one end point: volumeRatio v2/v1 &gt; 1, pressureRatio p1/p2 &gt; 1, toPressure, toVolume, or an earlier state's pressure or volume.</summary>
-    public ClosedCycle ExpandIsentropic(string label, double? volumeRatio = null, double? pressureRatio = null, Pressure? toPressure = null, SpecificVolume? toVolume = null, string? toPressureOf = null, string? toVolumeOf = null) =>
-        new(Chain.Then(new IsentropicSpec(label, false, Chain.Target("isentropic expansion", pressureRatio, volumeRatio, toPressure, toVolume, toPressureOf, toVolumeOf))));
+    /// <summary>Reversible adiabatic expansion; give one end point: volumeRatio v2/v1 &gt; 1, pressureRatio p1/p2 &gt; 1, toPressure, toVolume, an earlier state's pressure or volume, or toTemperature.</summary>
+    public ClosedCycle ExpandIsentropic(string label, double? volumeRatio = null, double? pressureRatio = null, Pressure? toPressure = null, SpecificVolume? toVolume = null, string? toPressureOf = null, string? toVolumeOf = null, Temperature? toTemperature = null) =>
+        new(Chain.Then(new IsentropicSpec(label, false, Chain.Target("isentropic expansion", pressureRatio, volumeRatio, toPressure, toVolume, toPressureOf, toVolumeOf, toTemperature))));
 
     /// <summary>Polytropic compression p·vⁿ = constant with exponent <paramref name="n"/>; end points as for the isentrope.</summary>
     public ClosedCycle CompressPolytropic(string label, double n, double? volumeRatio = null, double? pressureRatio = null, Pressure? toPressure = null, SpecificVolume? toVolume = null, string? toPressureOf = null, string? toVolumeOf = null) =>

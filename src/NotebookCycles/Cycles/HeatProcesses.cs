@@ -150,7 +150,13 @@ internal sealed class HeatSpec(string? label, string device, PathLaw law, bool h
             stepFlow = mOut;
         }
 
-        var assumptions = closed ? Rec.Reversible : Rec.FlowHeat;
+        if (regenerated)
+        {
+            // A perfect regenerator exchanges heat across a vanishing temperature difference: reversible.
+            entropyGenerated = 0;
+        }
+
+        var assumptions = regenerated ? (closed ? Rec.PerfectRegeneratorClosed : Rec.PerfectRegeneratorFlow) : closed ? Rec.Reversible : Rec.FlowHeat;
         c.AddStep(process, law, state, q, w, boundaryTemperature ?? double.NaN, regenerated, lines: lines, assumptions: assumptions, entropyGenerated: entropyGenerated, flowAfter: flowAfter, stepFlow: stepFlow);
     }
 

@@ -13,17 +13,28 @@ internal enum TargetKind
     Volume,
     PressureOf,
     VolumeOf,
+    Temperature,
 }
 
 /// <summary>The end point of a compression or expansion: a ratio (always ≥ 1, in the process's own sense), a value, or an earlier state's value.</summary>
 internal readonly record struct Target(TargetKind Kind, double Value, string? Of)
 {
-    public static Target From(string cycle, string step, double? pressureRatio, double? volumeRatio, double? pressure, double? volume, string? toPressureOf, string? toVolumeOf)
+    public static Target From(string cycle, string step, double? pressureRatio, double? volumeRatio, double? pressure, double? volume, string? toPressureOf, string? toVolumeOf, double? temperature = null)
     {
+        if (temperature is { } t)
+        {
+            if (pressureRatio.HasValue || volumeRatio.HasValue || pressure.HasValue || volume.HasValue || toPressureOf is not null || toVolumeOf is not null)
+            {
+                throw new CycleDefinitionException(cycle, step, null, "give exactly one end point; a temperature and another end point were given.");
+            }
+
+            return new(TargetKind.Temperature, t, null);
+        }
+
         int given = (pressureRatio.HasValue ? 1 : 0) + (volumeRatio.HasValue ? 1 : 0) + (pressure.HasValue ? 1 : 0) + (volume.HasValue ? 1 : 0) + (toPressureOf is null ? 0 : 1) + (toVolumeOf is null ? 0 : 1);
         if (given != 1)
         {
-            throw new CycleDefinitionException(cycle, step, null, $"give exactly one end point (pressureRatio, volumeRatio, toPressure, toVolume, toPressureOf or toVolumeOf); {given} were given.");
+            throw new CycleDefinitionException(cycle, step, null, $"give exactly one end point (pressureRatio, volumeRatio, toPressure, toVolume, toPressureOf, toVolumeOf or toTemperature); {given} were given.");
         }
 
         return pressureRatio is { } pr ? new(TargetKind.PressureRatio, pr, null)
@@ -107,6 +118,8 @@ internal static class Rec
     public static readonly ImmutableArray<string> Reversible = ["internally reversible"];
     public static readonly ImmutableArray<string> FlowAdiabatic = ["adiabatic", "steady flow", "kinetic and potential energy neglected"];
     public static readonly ImmutableArray<string> FlowHeat = ["steady flow", "no shaft work", "kinetic and potential energy neglected"];
+    public static readonly ImmutableArray<string> PerfectRegeneratorClosed = ["internally reversible", "heat exchanged with a perfect regenerator inside the cycle (reversible)"];
+    public static readonly ImmutableArray<string> PerfectRegeneratorFlow = ["steady flow", "no shaft work", "heat exchanged with a perfect regenerator inside the cycle (reversible)"];
 }
 
 /// <summary>Isentropic compression or expansion, closed (w = u1 − u2) or flow (w = h1 − h2).</summary>
@@ -118,8 +131,23 @@ internal sealed class IsentropicSpec(string label, bool compression, Target targ
     {
         var a = c.Current.Point;
         string from = c.Current.Label, to = Label!;
-        double end = target.Resolve(c, to, compression, compression ? "compression ratio" : "expansion ratio");
-        var b = target.ByPressure ? c.Compute(to, m => m.FromPS(end, a.S)) : c.Compute(to, m => m.FromVS(end, a.S));
+        StatePoint b;
+        if (target.Kind == TargetKind.Temperature)
+        {
+            double t2 = target.Value;
+            if (!double.IsFinite(t2) || (compression ? t2 <= a.T : t2 >= a.T))
+            {
+                throw c.Error(to, $"an isentropic {(compression ? "compression" : "expansion")} must end {(compression ? "above" : "below")} the start temperature: T = {Units.SiText.Number(t2)} K against {Units.SiText.Number(a.T)} K at state {from}.");
+            }
+
+            b = c.Compute(to, m => m.FromTS(t2, a.S));
+        }
+        else
+        {
+            double end = target.Resolve(c, to, compression, compression ? "compression ratio" : "expansion ratio");
+            b = target.ByPressure ? c.Compute(to, m => m.FromPS(end, a.S)) : c.Compute(to, m => m.FromVS(end, a.S));
+        }
+
         bool closed = c.Kind == SystemKind.Closed;
         double w = closed ? a.U - b.U : a.H - b.H;
         ImmutableArray<RecordLine> lines = default;
@@ -128,7 +156,15 @@ internal sealed class IsentropicSpec(string label, bool compression, Target targ
             var l = ImmutableArray.CreateBuilder<RecordLine>(6);
             l.Add(Rec.Line("s" + to, "s" + from, "", Rec.S(b.S)));
             AddIsentropeCheck(c, l, from, to, a, b, target.ByPressure);
-            l.Add(Rec.Lookup(c, to, "T", Rec.T(b.T), target.ByPressure ? "p" : "v", target.ByPressure ? Rec.P(b.P) : Rec.V(b.V), "s", Rec.S(b.S)));
+            if (target.Kind == TargetKind.Temperature)
+            {
+                l.Add(Rec.Lookup(c, to, "p", Rec.P(b.P), "T", Rec.T(b.T), "s", Rec.S(b.S)));
+            }
+            else
+            {
+                l.Add(Rec.Lookup(c, to, "T", Rec.T(b.T), target.ByPressure ? "p" : "v", target.ByPressure ? Rec.P(b.P) : Rec.V(b.V), "s", Rec.S(b.S)));
+            }
+
             l.Add(target.ByPressure
                 ? Rec.Lookup(c, to, "v", Rec.V(b.V), "p", Rec.P(b.P), "s", Rec.S(b.S))
                 : Rec.Lookup(c, to, "p", Rec.P(b.P), "v", Rec.V(b.V), "s", Rec.S(b.S)));
