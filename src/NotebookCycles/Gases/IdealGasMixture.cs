@@ -64,6 +64,10 @@ public sealed class IdealGasMixture : IPropertyModel
     private readonly InverseTable _s0Table;
     private readonly InverseTable _qTable;
     private readonly GasComponent[] _components;
+    private readonly double _prMin;
+    private readonly double _prMax;
+    private readonly double _vrMin;
+    private readonly double _vrMax;
 
     internal IdealGasMixture(string name, GasComponent[] components, EnthalpyDatum datum)
     {
@@ -113,6 +117,10 @@ public sealed class IdealGasMixture : IPropertyModel
         _qTable = InverseTable.Create(new VolumeFunction(this), TMin, TMax);
         _hRange = new ValidityRange(StateProperty.Enthalpy, _hTable.ValueMin, _hTable.ValueMax);
         _uRange = new ValidityRange(StateProperty.InternalEnergy, _uTable.ValueMin, _uTable.ValueMax);
+        _prMin = RelativePressureAt(TMin);
+        _prMax = RelativePressureAt(TMax);
+        _vrMin = TMax / RelativeReferenceTemperature / _prMax;
+        _vrMax = TMin / RelativeReferenceTemperature / _prMin;
     }
 
     /// <inheritdoc />
@@ -223,14 +231,14 @@ public sealed class IdealGasMixture : IPropertyModel
     public double RelativePressure(double temperature)
     {
         Check.InRange(Name, TRange, temperature, StateProperty.Temperature, temperature);
-        return Math.Exp((StandardEntropyCore(temperature) - _s0Ref) / _r);
+        return RelativePressureAt(temperature);
     }
 
     /// <summary>Relative volume vr(T) = (T/298.15 K)/pr(T), 1 at 298.15 K; only ratios are meaningful.</summary>
     public double RelativeVolume(double temperature)
     {
         Check.InRange(Name, TRange, temperature, StateProperty.Temperature, temperature);
-        return temperature / RelativeReferenceTemperature / Math.Exp((StandardEntropyCore(temperature) - _s0Ref) / _r);
+        return temperature / RelativeReferenceTemperature / RelativePressureAt(temperature);
     }
 
     // ---- inversions ------------------------------------------------------------------------------------------------
@@ -265,12 +273,13 @@ public sealed class IdealGasMixture : IPropertyModel
     /// </summary>
     public double TemperatureFromRelativePressure(double relativePressure)
     {
-        double s0 = _s0Ref + _r * Math.Log(relativePressure);
-        if (!(s0 >= _s0Table.ValueMin && s0 <= _s0Table.ValueMax))
+        if (!(relativePressure >= _prMin && relativePressure <= _prMax))
         {
-            ThrowRelative("relative pressure pr", nameof(relativePressure), relativePressure, RelativePressureAt(TMin), RelativePressureAt(TMax));
+            ThrowRelative("relative pressure pr", nameof(relativePressure), relativePressure, _prMin, _prMax);
         }
 
+        // pr is inside [pr(200 K), pr(6000 K)]; the clamp only absorbs the rounding of exp and log at the two ends.
+        double s0 = Math.Clamp(_s0Ref + _r * Math.Log(relativePressure), _s0Table.ValueMin, _s0Table.ValueMax);
         var f = new StandardEntropyFunction(this) { Target = s0 };
         return _s0Table.Solve(ref f);
     }
@@ -281,12 +290,13 @@ public sealed class IdealGasMixture : IPropertyModel
     /// </summary>
     public double TemperatureFromRelativeVolume(double relativeVolume)
     {
-        double q = -Math.Log(relativeVolume);
-        if (!(q >= _qTable.ValueMin && q <= _qTable.ValueMax))
+        if (!(relativeVolume >= _vrMin && relativeVolume <= _vrMax))
         {
-            ThrowRelative("relative volume vr", nameof(relativeVolume), relativeVolume, Math.Exp(-_qTable.ValueMax), Math.Exp(-_qTable.ValueMin));
+            ThrowRelative("relative volume vr", nameof(relativeVolume), relativeVolume, _vrMin, _vrMax);
         }
 
+        // vr is inside [vr(6000 K), vr(200 K)]; the clamp only absorbs the rounding of exp and log at the two ends.
+        double q = Math.Clamp(-Math.Log(relativeVolume), _qTable.ValueMin, _qTable.ValueMax);
         var f = new VolumeFunction(this) { Target = q };
         return _qTable.Solve(ref f);
     }
