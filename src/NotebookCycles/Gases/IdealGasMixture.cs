@@ -34,6 +34,8 @@ namespace NotebookCycles.Gases;
 /// <para>
 /// NaN policy: NaN, infinite or non-positive inputs, and inputs whose implied temperature or pressure lies outside the
 /// range, throw <see cref="StateOutOfRangeException"/> naming the property and its valid range; nothing is clamped.
+/// The one allowance: a derived quantity (p from T and v, T from p and v, the entropy target of (p, s) or (v, s))
+/// that misses a range end by rounding only (1e-12 relative) is taken as that end.
 /// </para>
 /// </remarks>
 public sealed class IdealGasMixture : IPropertyModel
@@ -317,7 +319,7 @@ public sealed class IdealGasMixture : IPropertyModel
         const StateProperty a = StateProperty.Temperature, b = StateProperty.SpecificVolume;
         Check.InRange(Name, TRange, temperature, a, temperature, b, specificVolume);
         Check.Positive(Name, b, specificVolume, a, temperature, b, specificVolume);
-        double p = _r * temperature / specificVolume;
+        double p = Snap(_r * temperature / specificVolume, PRange);
         Check.InRange(Name, PRange, p, a, temperature, b, specificVolume);
         return Build(temperature, p);
     }
@@ -328,7 +330,7 @@ public sealed class IdealGasMixture : IPropertyModel
         const StateProperty a = StateProperty.Pressure, b = StateProperty.SpecificVolume;
         Check.InRange(Name, PRange, pressure, a, pressure, b, specificVolume);
         Check.Positive(Name, b, specificVolume, a, pressure, b, specificVolume);
-        double t = pressure * specificVolume / _r;
+        double t = Snap(pressure * specificVolume / _r, TRange);
         Check.InRange(Name, TRange, t, a, pressure, b, specificVolume);
         return Build(t, pressure);
     }
@@ -349,7 +351,7 @@ public sealed class IdealGasMixture : IPropertyModel
         Check.InRange(Name, PRange, pressure, a, pressure, b, entropy);
         Check.Finite(Name, b, entropy, a, pressure, b, entropy);
         double shift = _sMix - _r * Math.Log(pressure / StandardPressure);
-        double s0 = entropy - shift;
+        double s0 = Snap(entropy - shift, _s0Table.ValueMin, _s0Table.ValueMax);
         if (!(s0 >= _s0Table.ValueMin && s0 <= _s0Table.ValueMax))
         {
             Check.ThrowOutOfRange(Name, new ValidityRange(b, _s0Table.ValueMin + shift, _s0Table.ValueMax + shift), entropy, a, pressure, b, entropy, "At this pressure s must lie between s(200 K) and s(6000 K).");
@@ -367,7 +369,7 @@ public sealed class IdealGasMixture : IPropertyModel
         Check.InRange(Name, _uRange, internalEnergy, a, specificVolume, b, internalEnergy);
         var f = new InternalEnergyFunction(this) { Target = internalEnergy };
         double t = _uTable.Solve(ref f);
-        double p = _r * t / specificVolume;
+        double p = Snap(_r * t / specificVolume, PRange);
         Check.InRange(Name, PRange, p, a, specificVolume, b, internalEnergy);
         return Build(t, p);
     }
@@ -381,7 +383,7 @@ public sealed class IdealGasMixture : IPropertyModel
 
         // s = s°(T) + s_mix − R·ln(R·T/(v·p°)), and q(T) = (s°(T) − s°_ref)/R − ln(T/T_ref), so
         // q = (s − s_mix − s°_ref)/R + ln(R/(v·p°)) + ln T_ref: the relative-volume function inverts it.
-        double q = (entropy - _sMix - _s0Ref) / _r + Math.Log(_r / (specificVolume * StandardPressure)) + _lnTRef;
+        double q = Snap((entropy - _sMix - _s0Ref) / _r + Math.Log(_r / (specificVolume * StandardPressure)) + _lnTRef, _qTable.ValueMin, _qTable.ValueMax);
         if (!(q >= _qTable.ValueMin && q <= _qTable.ValueMax))
         {
             double shift = _sMix + _s0Ref - _r * Math.Log(_r / (specificVolume * StandardPressure)) - _r * _lnTRef;
@@ -390,7 +392,7 @@ public sealed class IdealGasMixture : IPropertyModel
 
         var f = new VolumeFunction(this) { Target = q };
         double t = _qTable.Solve(ref f);
-        double p = _r * t / specificVolume;
+        double p = Snap(_r * t / specificVolume, PRange);
         Check.InRange(Name, PRange, p, a, specificVolume, b, entropy);
         return Build(t, p);
     }
@@ -401,7 +403,7 @@ public sealed class IdealGasMixture : IPropertyModel
         const StateProperty a = StateProperty.Temperature, b = StateProperty.Entropy;
         Check.InRange(Name, TRange, temperature, a, temperature, b, entropy);
         Check.Finite(Name, b, entropy, a, temperature, b, entropy);
-        double p = StandardPressure * Math.Exp((StandardEntropyCore(temperature) + _sMix - entropy) / _r);
+        double p = Snap(StandardPressure * Math.Exp((StandardEntropyCore(temperature) + _sMix - entropy) / _r), PRange);
         Check.InRange(Name, PRange, p, a, temperature, b, entropy);
         return Build(temperature, p);
     }
@@ -413,7 +415,7 @@ public sealed class IdealGasMixture : IPropertyModel
         Check.InRange(Name, _hRange, enthalpy, a, enthalpy, b, entropy);
         Check.Finite(Name, b, entropy, a, enthalpy, b, entropy);
         double t = SolveEnthalpy(enthalpy);
-        double p = StandardPressure * Math.Exp((StandardEntropyCore(t) + _sMix - entropy) / _r);
+        double p = Snap(StandardPressure * Math.Exp((StandardEntropyCore(t) + _sMix - entropy) / _r), PRange);
         Check.InRange(Name, PRange, p, a, enthalpy, b, entropy);
         return Build(t, p);
     }
@@ -480,6 +482,29 @@ public sealed class IdealGasMixture : IPropertyModel
         cp = (g.C1 * inv + g.C2) * inv + g.C3 + t * (g.C4 + t * (g.C5 + t * (g.C6 + t * g.C7)));
         return (g.S1 * inv - g.C2) * inv + g.C3 * Math.Log(t) + t * (g.C4 + t * (g.S5 + t * (g.S6 + t * g.S7))) + g.SB;
     }
+
+    /// <summary>
+    /// A derived quantity (not a user input) that lies beyond a range end by no more than rounding, 1e-12 relative,
+    /// is taken as that end, so a state exactly at 200 K, 6000 K, 1 Pa or 100 MPa solves from any input pair.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static double Snap(double value, double min, double max)
+    {
+        if (value < min && value >= min - 1e-12 * Math.Abs(min))
+        {
+            return min;
+        }
+
+        if (value > max && value <= max + 1e-12 * Math.Abs(max))
+        {
+            return max;
+        }
+
+        return value;
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static double Snap(double value, in ValidityRange range) => Snap(value, range.Minimum, range.Maximum);
 
     private double SolveEnthalpy(double enthalpy)
     {

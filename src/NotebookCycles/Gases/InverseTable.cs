@@ -18,7 +18,7 @@ internal interface ITemperatureFunction : IDifferentiableFunction
 internal sealed class InverseTable
 {
     private const int Cells = 256;
-    private const double Tolerance = 1e-12;
+    private const double Tolerance = 1e-14;
     private readonly double[] _t;
     private readonly double _tMin;
     private readonly double _tMax;
