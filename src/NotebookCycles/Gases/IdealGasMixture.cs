@@ -16,9 +16,9 @@ namespace NotebookCycles.Gases;
 /// </para>
 /// <para>
 /// Units: T in K, p in Pa, v in m³/kg, h and u in J/kg, s, cp, cv in J/(kg·K). Validity: 200 K to 6000 K (the range of
-/// the fits) and 1 Pa to 100 MPa. The ideal-gas equation of state pv = RT is assumed throughout: at high pressure and
-/// low temperature real gases depart from it (for air by about 1 % in pv/RT at 10 MPa near room temperature), and no
-/// dissociation is modelled, so above about 2500 K the fixed composition is itself an approximation.
+/// the fits) and 1 Pa to 100 MPa. The ideal-gas equation of state pv = RT is assumed throughout: at high pressure,
+/// most near and below room temperature, real gases depart from it (check the compressibility factor above about
+/// 10 MPa), and no dissociation is modelled, so above about 2500 K the fixed composition is itself an approximation.
 /// </para>
 /// <para>
 /// Enthalpy datum: <see cref="EnthalpyDatum.Sensible"/> (h = 0 at 0 K) or <see cref="EnthalpyDatum.Formation"/>
