@@ -154,7 +154,7 @@ public sealed class CombustionProducts
         EquivalenceRatio = equivalenceRatio;
         AirFuelRatio = airFuelRatio;
         AirMolesPerFuelMole = airMoles;
-        MolesPerFuelMole = moles;
+        MolesPerFuelMole = moles.AsReadOnly();
         TotalMolesPerFuelMole = totalMoles;
         Gas = gas;
     }

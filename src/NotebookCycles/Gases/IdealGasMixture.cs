@@ -66,6 +66,7 @@ public sealed class IdealGasMixture : IPropertyModel
     private readonly InverseTable _s0Table;
     private readonly InverseTable _qTable;
     private readonly GasComponent[] _components;
+    private readonly IReadOnlyList<GasComponent> _componentsView;
     private readonly double _prMin;
     private readonly double _prMax;
     private readonly double _vrMin;
@@ -74,6 +75,7 @@ public sealed class IdealGasMixture : IPropertyModel
     internal IdealGasMixture(string name, GasComponent[] components, EnthalpyDatum datum)
     {
         _components = components;
+        _componentsView = Array.AsReadOnly(components);
         Datum = datum;
         double molarMass = 0;
         foreach (GasComponent c in components)
@@ -142,7 +144,7 @@ public sealed class IdealGasMixture : IPropertyModel
     public bool HasSaturation => false;
 
     /// <summary>The species with their mole and mass fractions.</summary>
-    public IReadOnlyList<GasComponent> Components => _components;
+    public IReadOnlyList<GasComponent> Components => _componentsView;
 
     /// <summary>The enthalpy datum of <see cref="Enthalpy"/>, <see cref="InternalEnergy"/> and every state.</summary>
     public EnthalpyDatum Datum { get; }

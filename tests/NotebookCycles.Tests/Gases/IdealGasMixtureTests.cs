@@ -298,8 +298,12 @@ public sealed class IdealGasMixtureTests
         Assert.Equal(StateProperty.Enthalpy, e.Property);
         Assert.Contains("valid h is " + Air.EnthalpyRange, e.Message, StringComparison.Ordinal);
         Assert.Contains("200.143 kJ/kg to 7518.13 kJ/kg", e.Message, StringComparison.Ordinal);
-        Assert.Throws<StateOutOfRangeException>(() => Air.TemperatureFromEnthalpy(double.NaN));
-        Assert.Throws<StateOutOfRangeException>(() => Air.TemperatureFromEnthalpy(Air.Enthalpy(6000) * 1.001));
+        foreach (double h in new[] { double.NaN, double.NegativeInfinity, Air.Enthalpy(6000) * 1.001 })
+        {
+            var t = Assert.Throws<StateOutOfRangeException>(() => Air.TemperatureFromEnthalpy(h));
+            Assert.Equal(StateProperty.Enthalpy, t.Property);
+            Assert.Contains("valid h is 200.143 kJ/kg to 7518.13 kJ/kg", t.Message, StringComparison.Ordinal);
+        }
     }
 
     [Fact]
@@ -308,7 +312,8 @@ public sealed class IdealGasMixtureTests
         var e = Assert.Throws<StateOutOfRangeException>(() => Air.FromVU(1.0, Air.InternalEnergy(200) - 1));
         Assert.Equal(StateProperty.InternalEnergy, e.Property);
         Assert.Contains("valid u is " + Air.InternalEnergyRange, e.Message, StringComparison.Ordinal);
-        Assert.Throws<StateOutOfRangeException>(() => Air.TemperatureFromInternalEnergy(double.PositiveInfinity));
+        var inf = Assert.Throws<StateOutOfRangeException>(() => Air.TemperatureFromInternalEnergy(double.PositiveInfinity));
+        Assert.Contains("u is infinite; valid u is " + Air.InternalEnergyRange, inf.Message, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -322,7 +327,10 @@ public sealed class IdealGasMixtureTests
         AssertRelative(sMax, e.Range.Maximum, 1e-12);
         var v = Assert.Throws<StateOutOfRangeException>(() => Air.FromVS(0.5, Air.FromTV(6000, 0.5).S + 1));
         AssertRelative(Air.FromTV(6000, 0.5).S, v.Range.Maximum, 1e-12);
-        Assert.Throws<StateOutOfRangeException>(() => Air.FromPS(1e5, double.NaN));
+        var nan = Assert.Throws<StateOutOfRangeException>(() => Air.FromPS(1e5, double.NaN));
+        Assert.Contains("s is not a number; valid s is any finite number", nan.Message, StringComparison.Ordinal);
+        var s0 = Assert.Throws<StateOutOfRangeException>(() => Air.TemperatureFromStandardEntropy(Air.StandardEntropy(200) - 1));
+        Assert.Contains("valid s is " + Units.SiText.Format(StateProperty.Entropy, Air.StandardEntropy(200)), s0.Message, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -335,8 +343,13 @@ public sealed class IdealGasMixtureTests
         Assert.Contains("v = 0.0001 m³/kg", e.Message, StringComparison.Ordinal);
         var s = Assert.Throws<StateOutOfRangeException>(() => Air.FromTS(300, Air.Entropy(300, 1e5) - 5000));
         Assert.Equal(StateProperty.Pressure, s.Property);
+        Assert.Contains("valid p is 0.001 kPa to 100 MPa", s.Message, StringComparison.Ordinal);
         var hs = Assert.Throws<StateOutOfRangeException>(() => Air.FromHS(Air.Enthalpy(300), Air.Entropy(300, 1e5) + 5000));
         Assert.Equal(StateProperty.Pressure, hs.Property);
+        Assert.Contains("valid p is 0.001 kPa to 100 MPa", hs.Message, StringComparison.Ordinal);
+        var vu = Assert.Throws<StateOutOfRangeException>(() => Air.FromVU(1e-4, Air.InternalEnergy(300)));
+        Assert.Equal(StateProperty.Pressure, vu.Property);
+        Assert.Contains("valid p is 0.001 kPa to 100 MPa", vu.Message, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -30,7 +30,12 @@ public sealed class IdealGasTests
         Assert.Equal(["N2", "O2", "Ar", "CO2"], air.Components.Select(c => c.Species.Name).ToArray());
         Assert.Equal(0.78084, air.Components[0].MoleFraction, 1e-12);
         Assert.Equal(1.0, air.Components.Sum(c => c.MassFraction), 1e-12);
+        Assert.IsNotType<GasComponent[]>(air.Components); // immutable model: no writable array handed out
         Assert.Equal(8.314510 / 0.0289651159, air.GasConstant, 1e-3); // R of the fits / M of the Air record
+
+        // On the formation datum, h(298.15 K) of dry air is its CO2's share of ΔHf: the Air record's Hf298 = −125.53 J/mol
+        // (NASA/TP-2002-211556 file).
+        Assert.InRange(air.WithDatum(EnthalpyDatum.Formation).Enthalpy(298.15) * air.MolarMass - (-125.53), -0.01, 0.01);
     }
 
     [Fact]
@@ -99,6 +104,7 @@ public sealed class IdealGasTests
         Assert.Contains("Kr", m.Message, StringComparison.Ordinal);
         var d = Assert.Throws<ArgumentException>(() => IdealGas.Mixture(("N2", 0.5), ("N2", 0.5)));
         Assert.Contains("appears twice", d.Message, StringComparison.Ordinal);
-        Assert.Throws<ArgumentException>(() => IdealGas.Mixture(Array.Empty<(string, double)>()));
+        var empty = Assert.Throws<ArgumentException>(() => IdealGas.Mixture(Array.Empty<(string, double)>()));
+        Assert.Contains("at least one species", empty.Message, StringComparison.Ordinal);
     }
 }
