@@ -68,7 +68,7 @@ internal sealed class InverseTable
 
     /// <summary>
     /// The temperature where the function equals <c>f.Target</c>, which the caller has checked lies in
-    /// [<see cref="ValueMin"/>, <see cref="ValueMax"/>]. Converged to a Newton step below 1e-12 relative.
+    /// [<see cref="ValueMin"/>, <see cref="ValueMax"/>]. Converged to a Newton step below 1e-14 relative.
     /// </summary>
     public double Solve<TFunction>(ref TFunction f)
         where TFunction : struct, ITemperatureFunction
