@@ -19,6 +19,19 @@ internal static class Check
         }
     }
 
+    /// <summary>
+    /// As the two-input <see cref="InRange(string, in ValidityRange, double, StateProperty, double, StateProperty, double)"/>,
+    /// for requests with one input (a property function of temperature, or a temperature from one property).
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static void InRange(string model, in ValidityRange range, double value, StateProperty input, double inputValue)
+    {
+        if (!(value >= range.Minimum && value <= range.Maximum))
+        {
+            ThrowOutOfRange(model, range, value, input, inputValue);
+        }
+    }
+
     /// <summary>Throws unless <paramref name="value"/> is finite and strictly positive (absolute temperature, pressure, volume).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static void Positive(string model, StateProperty property, double value, StateProperty firstInput, double firstValue, StateProperty secondInput, double secondValue)
@@ -53,6 +66,11 @@ internal static class Check
     [DoesNotReturn]
     public static void ThrowOutOfRange(string model, ValidityRange range, double value, StateProperty firstInput, double firstValue, StateProperty secondInput, double secondValue, string? detail = null) =>
         throw new StateOutOfRangeException(model, [new StateInput(firstInput, firstValue), new StateInput(secondInput, secondValue)], range.Property, value, range, detail);
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    [DoesNotReturn]
+    public static void ThrowOutOfRange(string model, ValidityRange range, double value, StateProperty input, double inputValue, string? detail = null) =>
+        throw new StateOutOfRangeException(model, [new StateInput(input, inputValue)], range.Property, value, range, detail);
 
     [MethodImpl(MethodImplOptions.NoInlining)]
     [DoesNotReturn]
