@@ -39,8 +39,14 @@ internal static class Sr201
     /// <summary>Highest h of region 2: h(1073.15 K, p_sat(273.15 K)), kJ/kg.</summary>
     internal const double Region2HMax = 4160.660928;
 
-    /// <summary>Entropy of the 2b/2c boundary used by the p(h,s) equations (SR2-01 Section 3.1), kJ/(kg K).</summary>
+    /// <summary>Entropy of the 2b/2c boundary used by the p(h,s) equations, kJ/(kg K).</summary>
     internal const double S2bc = 5.85;
+
+    /// <summary>
+    /// s''(4 MPa), kJ/(kg K) (from the IF97 forward equations): the 2a/2b boundary, the 4 MPa isobar, starts here on
+    /// the saturated-vapour line; a region-2 state with lower s is above 4 MPa and so never in 2a.
+    /// </summary>
+    internal const double S2abStart = 6.069709160;
 
     // Region 1, Eq. 1: p/p* = Σ n (η + 0.05)^I (σ + 0.05)^J, η = h/3400, σ = s/7.6, p* = 100 MPa.
     private static readonly int[] I1 = [0, 0, 0, 0, 0, 0, 0, 0, 1, 1, 1, 1, 2, 2, 2, 3, 4, 4, 5];
@@ -134,7 +140,8 @@ internal static class Sr201
 
     /// <summary>
     /// Backward equation p(h,s) of region 2 (SR2-01 Eqs. 3 to 5), MPa, choosing the subregion as the release does:
-    /// 2a if h ≤ h_2ab(s); otherwise 2b if s ≥ 5.85 kJ/(kg K) (the 2b/2c boundary of the p(h,s) equations), else 2c.
+    /// 2a if h ≤ h_2ab(s) (the 4 MPa isobar, which exists only for s ≥ s''(4 MPa) = 6.069709160 kJ/(kg K));
+    /// otherwise 2b if s ≥ 5.85 kJ/(kg K) (the 2b/2c boundary of the p(h,s) equations), else 2c.
     /// Valid in region 2 of IAPWS-IF97 (T ≤ 1073.15 K, p ≤ 100 MPa); checked here: h from 2500.892618 to
     /// 4160.660928 kJ/kg and s from 5.048096828 to 11.921055069 kJ/(kg K), the region's bounding box.
     /// </summary>
@@ -158,7 +165,7 @@ internal static class Sr201
     {
         RangeGuard.Require("SR2-01 p2(h,s)", nameof(h), h, Region2HMin, Region2HMax, "kJ/kg", "bounding box of IF97 region 2");
         RangeGuard.Require("SR2-01 p2(h,s)", nameof(s), s, Region2SMin, Region2SMax, "kJ/(kg K)", "bounding box of IF97 region 2");
-        if (h <= H2ab(s))
+        if (s >= S2abStart && h <= H2ab(s))
         {
             return 'a';
         }

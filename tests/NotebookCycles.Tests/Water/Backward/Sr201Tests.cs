@@ -53,6 +53,18 @@ public sealed class Sr201Tests(ITestOutputHelper output)
     }
 
     [Fact]
+    public void Below_the_start_of_the_4_MPa_isobar_no_state_is_in_2a()
+    {
+        // For s < s''(4 MPa) = 6.069709160 kJ/(kg K) (IF97 forward equations) the 4 MPa isobar lies in the wet-steam
+        // region, so every region-2 state there is above 4 MPa: subregion 2b (s ≥ 5.85) or 2c, although the cubic
+        // h2ab(s) extended below its range would pass above the saturated-vapour line.
+        Assert.True(Sr201.H2ab(6.0) > 2760);
+        Assert.Equal('b', Sr201.Subregion2(2760, 6.0));
+        Assert.Equal('c', Sr201.Subregion2(2700, 5.6));
+        Assert.Equal('a', Sr201.Subregion2(2760, 6.1));
+    }
+
+    [Fact]
     public void Region1_entropy_above_the_region_throws_naming_s_and_the_range()
     {
         VerificationAssert.OutOfRange(() => Sr201.P1HS(500, 4.0), "s", "4", "-0.008582287093", "3.77828134");
