@@ -12,6 +12,8 @@ namespace NotebookCycles.Water.Backward;
 /// computed from the IF97 forward equations (region 1: T = 273.15 K and 623.15 K, p = p_sat and 100 MPa;
 /// region 2: the saturated-vapour line, the B23 line and T = 1073.15 K at p_sat(273.15 K)); whether a point inside
 /// the box is really in the region is the caller's test.
+/// Inputs outside a range, and NaN inputs, throw <see cref="ArgumentOutOfRangeException"/> naming the input,
+/// its value and the range; nothing is clamped or extrapolated.
 /// </remarks>
 internal static class Sr201
 {

@@ -11,6 +11,8 @@ namespace NotebookCycles.Water.Backward;
 /// h(863.15 K, 100 MPa) = 2812.942061 kJ/kg, s from s(623.15 K, 100 MPa) = 3.397782955 kJ/(kg K) to the highest
 /// s on the B23 line, 5.260578707 kJ/(kg K) (corner values from the IF97 forward equations; the B23 extremes as
 /// SR4-04 states them). Whether a point inside the box is really in region 3 is the caller's test.
+/// Inputs outside a range, and NaN inputs, throw <see cref="ArgumentOutOfRangeException"/> naming the input,
+/// its value and the range; nothing is clamped or extrapolated.
 /// </remarks>
 internal static class Sr303
 {

@@ -10,6 +10,8 @@ namespace NotebookCycles.Water.Backward;
 /// the saturated-liquid line, h''2ab(s) and h''2c3b(s) the saturated-vapour line, h_B13(s) the region 1/3
 /// boundary (T = 623.15 K), T_B23(h,s) the temperature on the region 2/3 boundary. Each range below is the one the
 /// release states for the equation, with the end points given as states (s'(273.15 K) and so on) and their values.
+/// Inputs outside a range, and NaN inputs, throw <see cref="ArgumentOutOfRangeException"/> naming the input,
+/// its value and the range; nothing is clamped or extrapolated.
 /// </remarks>
 internal static class Sr404
 {

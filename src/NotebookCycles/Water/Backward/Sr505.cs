@@ -9,8 +9,10 @@ namespace NotebookCycles.Water.Backward;
 /// <remarks>
 /// Valid in region 3 of IAPWS-IF97: p from p_sat(623.15 K) = 16.529164253 MPa to 100 MPa and T from 623.15 K to
 /// T_B23(p). The subregion test needs two equations of IAPWS-IF97 itself, the saturation-temperature equation
-/// (R7-97 Eq. 31) and the B23 temperature equation (R7-97 Eq. 29b, used for the range check); both are kept here
+/// (R7-97 Eq. 31) and the B23 temperature equation (R7-97 Eq. 6, used for the range check); both are kept here
 /// as private helpers so these functions stand alone.
+/// Inputs outside a range, and NaN inputs, throw <see cref="ArgumentOutOfRangeException"/> naming the input,
+/// its value and the range; nothing is clamped or extrapolated.
 /// </remarks>
 internal static partial class Sr505
 {
@@ -205,7 +207,7 @@ internal static partial class Sr505
         return (sum - Math.Sqrt(sum * sum - 4 * (NSat[8] + NSat[9] * d))) / 2;
     }
 
-    /// <summary>Temperature on the B23 line from IAPWS-IF97 Eq. 29b, K.</summary>
+    /// <summary>Temperature on the B23 line from IAPWS-IF97 Eq. 6, K.</summary>
     internal static double TB23(double p) => 0.57254459862746e3 + Math.Sqrt((p - 0.13918839778870e2) / 0.10192970039326e-2);
 
     private static char Select(double p, double t)

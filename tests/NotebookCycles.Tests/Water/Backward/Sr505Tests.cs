@@ -70,7 +70,7 @@ public sealed class Sr505Tests(ITestOutputHelper output)
     [Fact]
     public void Temperature_above_B23_throws_naming_T_and_the_range()
     {
-        // T_B23(50 MPa) is about 760.7 K (IAPWS-IF97 Eq. 29b); 900 K is region 2.
+        // T_B23(50 MPa) is about 760.7 K (IAPWS-IF97 Eq. 6); 900 K is region 2.
         var ex = Assert.Throws<ArgumentOutOfRangeException>(() => Sr505.V3PT(50, 900));
         Assert.Equal("T", ex.ParamName);
         Assert.Contains("T = 900", ex.Message, StringComparison.Ordinal);
@@ -82,6 +82,24 @@ public sealed class Sr505Tests(ITestOutputHelper output)
     public void Pressure_below_region3_throws_naming_p_and_the_range()
     {
         VerificationAssert.OutOfRange(() => Sr505.Subregion(10, 630), "p", "10", "16.529164253", "100");
+    }
+
+    // The subregion test uses private copies of two IAPWS-IF97 equations; check them against R7-97(2012):
+    // Table 36 (saturation temperature, Eq. 31) and the B23 check value of Eq. 6 (ReferenceData/iapws_if97_verification.csv).
+    [Theory]
+    [InlineData(0.1, 0.372755919E3)]
+    [InlineData(1.0, 0.453035632E3)]
+    [InlineData(10.0, 0.584149488E3)]
+    public void Private_saturation_temperature_matches_IF97_Table_36(double p, double tsat)
+    {
+        Assert.InRange(VerificationQuantities.RelativeError(Sr505.TSat(p), tsat), 0, 1e-8);
+    }
+
+    [Fact]
+    public void Private_B23_temperature_matches_the_IF97_check_value()
+    {
+        // IAPWS R7-97(2012) Section 4, Eq. 6 check: p = 16.5291643 MPa gives T = 623.15 K.
+        Assert.InRange(VerificationQuantities.RelativeError(Sr505.TB23(16.5291643), 0.62315E3), 0, 1e-8);
     }
 
     [Fact]
