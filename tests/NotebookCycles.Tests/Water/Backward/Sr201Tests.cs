@@ -46,7 +46,7 @@ public sealed class Sr201Tests(ITestOutputHelper output)
         double h = Sr201.H2ab(s);
         double pa = Sr201.P2aHS(h, s);
         double pb = Sr201.P2bHS(h, s);
-        Assert.InRange(pa, 3.9, 4.1); // the boundary is the 4 MPa isobar (IAPWS SR2-01(2014) Section 3.1)
+        Assert.InRange(pa, 3.9, 4.1); // IAPWS SR2-01(2014): the 2a/2b boundary h2ab(s) follows the 4 MPa isobar
         Assert.InRange(Math.Abs(pa - pb) / pa, 0, 1e-3);
         Assert.Equal('a', Sr201.Subregion2(h, s));
         Assert.Equal('b', Sr201.Subregion2(h + 1e-6, s));

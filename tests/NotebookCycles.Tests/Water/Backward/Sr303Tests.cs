@@ -39,7 +39,7 @@ public sealed class Sr303Tests(ITestOutputHelper output)
     [Fact]
     public void The_ps_equations_switch_at_the_critical_entropy()
     {
-        // s_c = 4.41202148223476 kJ/(kg K), the 3a/3b boundary of T(p,s) and v(p,s) (IAPWS SR3-03(2014) Section 3.3).
+        // s_c = 4.41202148223476 kJ/(kg K), the 3a/3b boundary of T(p,s) and v(p,s) (IAPWS SR3-03(2014), boundary of the (p,s) equations).
         Assert.Equal('a', Sr303.SubregionPS(50, 4.41202148223476));
         Assert.Equal('b', Sr303.SubregionPS(50, 4.41202148223477));
         // Both equations describe the boundary state; they agree there to well under 0.1 % (consistency check, no published value).
