@@ -77,7 +77,7 @@ internal static class ChainSolver
             for (int i = 0; i < specs.Length; i++)
             {
                 var spec = specs[i];
-                c.CurrentStepDescription = $"step {i + 1}, {spec.Describe} {c.Current.Label}→{spec.Label ?? start.Label}";
+                c.BeginStep(i, spec);
                 spec.Apply(c);
             }
 
@@ -208,7 +208,7 @@ internal static class ChainSolver
                 throw c.Error(step.To.Label, $"the step would destroy entropy: s_gen = Δs − q/T_b = {Units.SiText.Number(step.DeltaS / 1000)} − ({Units.SiText.Number(step.Q / 1000)} / {Units.SiText.Number(step.BoundaryTemperature)}) = {Units.SiText.Number(step.EntropyGenerated / 1000)} kJ/(kg·K) < 0, which the second law forbids. Check the efficiency, the effectiveness or the boundary temperature given.");
             }
 
-            checks.Add(new CycleCheck($"Second law, step {step.Name}", true, $"s_gen = {Units.SiText.Number(step.EntropyGenerated / 1000)} kJ/(kg·K) ≥ 0", Math.Min(step.EntropyGenerated, 0), tolerance));
+            checks.Add(new CycleCheck(CheckKind.SecondLaw, true, Math.Min(step.EntropyGenerated, 0), tolerance, step.EntropyGenerated, 0, step, null));
         }
 
         double netWork = expansion - compression;
@@ -219,14 +219,14 @@ internal static class ChainSolver
             throw new CycleDefinitionException(c.Title, "first-law check", null, $"net heat {Units.SiText.Number(sumQ / 1000)} kJ/kg differs from net work {Units.SiText.Number(netWork / 1000)} kJ/kg by {Units.SiText.Number(firstLawResidual / 1000)} kJ/kg.");
         }
 
-        checks.Insert(0, new CycleCheck("First law", true, $"Σq = {Units.SiText.Number(sumQ / 1000)} kJ/kg equals Σw = {Units.SiText.Number(netWork / 1000)} kJ/kg", firstLawResidual, firstLawTolerance));
+        checks.Insert(0, new CycleCheck(CheckKind.FirstLaw, true, firstLawResidual, firstLawTolerance, sumQ, netWork, null, null));
         double flowResidual = Math.Abs(c.Flow - startFlow);
         if (flowResidual > 1e-9)
         {
             throw new CycleDefinitionException(c.Title, "mass balance", start.Label, $"the flow returning to the start is {Units.SiText.Number(c.Flow)} of the reference flow but {Units.SiText.Number(startFlow)} left it.");
         }
 
-        checks.Insert(1, new CycleCheck("Cycle closes", true, $"the last step returns to state {start.Label}; mass fractions balance", flowResidual, 1e-9));
+        checks.Insert(1, new CycleCheck(CheckKind.Closure, true, flowResidual, 1e-9, c.Flow, startFlow, null, start.Label));
 
         bool engine = netWork > 0 && heatIn > 0;
         double efficiency = engine ? netWork / heatIn : double.NaN;
@@ -256,8 +256,7 @@ internal static class ChainSolver
             ExergyDestroyed = c.Options.DeadState.Temperature * sgenTotal,
         };
 
-        var warnings = ImmutableArray.CreateBuilder<string>();
-        warnings.AddRange(c.Warnings);
-        return new CycleResult(c.Title, c.Kind, c.Model, [.. c.States], [.. steps], figures, checks.ToImmutable(), warnings.ToImmutable(), c.Options.DeadState, [.. c.StateFlows], c.Record);
+        ImmutableArray<string> warnings = c.Warnings.Count == 0 ? [] : [.. c.Warnings];
+        return new CycleResult(c.Title, c.Kind, c.Model, [.. c.States], [.. steps], figures, checks.MoveToImmutable(), warnings, c.Options.DeadState, [.. c.StateFlows], c.Record);
     }
 }

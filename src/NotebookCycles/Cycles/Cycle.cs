@@ -88,7 +88,13 @@ internal sealed record Chain(string Title, SystemKind Kind, IPropertyModel Model
                 throw new CycleDefinitionException(Title, NextStep(spec.Describe), label, "a state label must not be empty.");
             }
 
-            if (label == Start.Label || Specs.Any(s => s.Label == label))
+            bool used = label == Start.Label;
+            foreach (var s in Specs)
+            {
+                used |= s.Label == label;
+            }
+
+            if (used)
             {
                 throw new CycleDefinitionException(Title, NextStep(spec.Describe), label, $"the label '{label}' is already used by an earlier state; give each state its own label.");
             }

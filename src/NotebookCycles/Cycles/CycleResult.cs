@@ -22,13 +22,76 @@ public sealed record DeadState(double Temperature = 298.15, double Pressure = 10
     public static DeadState Standard { get; } = new();
 }
 
-/// <summary>One balance check a cycle carries, with what was compared.</summary>
-/// <param name="Name">"First law", "Cycle closes", "Second law, step 2→3".</param>
-/// <param name="Passed">Whether it held within <paramref name="Tolerance"/>.</param>
-/// <param name="Detail">What was compared, in words and numbers.</param>
-/// <param name="Residual">The residual compared against the tolerance.</param>
-/// <param name="Tolerance">The tolerance used.</param>
-public sealed record CycleCheck(string Name, bool Passed, string Detail, double Residual, double Tolerance);
+/// <summary>Which balance a check tests.</summary>
+public enum CheckKind
+{
+    /// <summary>Net heat equals net work (to 1e-9 relative).</summary>
+    FirstLaw,
+
+    /// <summary>The cycle returns to its start state and the mass fractions balance.</summary>
+    Closure,
+
+    /// <summary>A step's entropy generation is not negative (within round-off).</summary>
+    SecondLaw,
+}
+
+/// <summary>One balance check a cycle carries, with what was compared. Its texts are composed when read.</summary>
+public sealed class CycleCheck
+{
+    internal CycleCheck(CheckKind kind, bool passed, double residual, double tolerance, double value, double reference, Step? step, string? startLabel)
+    {
+        Kind = kind;
+        Passed = passed;
+        Residual = residual;
+        Tolerance = tolerance;
+        Value = value;
+        Reference = reference;
+        Step = step;
+        _startLabel = startLabel;
+    }
+
+    private readonly string? _startLabel;
+
+    /// <summary>Which balance.</summary>
+    public CheckKind Kind { get; }
+
+    /// <summary>Whether it held within <see cref="Tolerance"/>.</summary>
+    public bool Passed { get; }
+
+    /// <summary>The residual compared against the tolerance (SI).</summary>
+    public double Residual { get; }
+
+    /// <summary>The tolerance used (SI).</summary>
+    public double Tolerance { get; }
+
+    /// <summary>The value checked: Σq (first law, J/kg), the returning mass fraction (closure), s_gen (second law, J/(kg·K)).</summary>
+    public double Value { get; }
+
+    /// <summary>What it is compared with: Σw, the leaving mass fraction, or 0.</summary>
+    public double Reference { get; }
+
+    /// <summary>The step a second-law check is about; null otherwise.</summary>
+    public Step? Step { get; }
+
+    /// <summary>"First law", "Cycle closes", "Second law, step 2→3".</summary>
+    public string Name => Kind switch
+    {
+        CheckKind.FirstLaw => "First law",
+        CheckKind.Closure => "Cycle closes",
+        _ => "Second law, step " + Step!.Name,
+    };
+
+    /// <summary>What was compared, in words and numbers.</summary>
+    public string Detail => Kind switch
+    {
+        CheckKind.FirstLaw => $"Σq = {Units.SiText.Number(Value / 1000)} kJ/kg equals Σw = {Units.SiText.Number(Reference / 1000)} kJ/kg",
+        CheckKind.Closure => $"the last step returns to state {_startLabel}; mass fractions balance",
+        _ => $"s_gen = {Units.SiText.Number(Value / 1000)} kJ/(kg·K) ≥ 0",
+    };
+
+    /// <inheritdoc />
+    public override string ToString() => $"{(Passed ? "passed" : "FAILED")}: {Name} — {Detail}";
+}
 
 /// <summary>
 /// The figures of merit of a cycle, per unit mass of the reference stream (SI: J/kg, K, Pa). A figure that does not

@@ -6,6 +6,8 @@ namespace NotebookCycles.Cycles;
 /// <summary>A compressor, pump or turbine with an isentropic efficiency: adiabatic steady flow, w = h1 − h2.</summary>
 internal sealed class MachineSpec(string label, string device, bool compression, Target target, double efficiency) : ProcessSpec(label)
 {
+    private string? _process;
+
     public override string Describe => device.ToLowerInvariant();
 
     public override void Apply(SolveContext c)
@@ -23,9 +25,9 @@ internal sealed class MachineSpec(string label, string device, bool compression,
         }
 
         double p2 = target.Resolve(c, to, compression, compression ? "pressure ratio" : "expansion pressure ratio");
-        var ideal = c.Compute(to + "s", m => m.FromPS(p2, a.S));
+        var ideal = c.Compute(to + "s", StateProperty.Pressure, p2, StateProperty.Entropy, a.S);
         double h2 = compression ? a.H + (ideal.H - a.H) / efficiency : a.H - efficiency * (a.H - ideal.H);
-        var b = efficiency == 1 ? ideal : c.Compute(to, m => m.FromPH(p2, h2));
+        var b = efficiency == 1 ? ideal : c.Compute(to, StateProperty.Pressure, p2, StateProperty.Enthalpy, h2);
         double w = a.H - b.H;
         ImmutableArray<RecordLine> lines = default;
         string s2 = to + "s";
@@ -49,7 +51,7 @@ internal sealed class MachineSpec(string label, string device, bool compression,
 
         var state = c.NewState(to, b);
         ImmutableArray<State> aux = efficiency < 1 ? [new State(s2, c.Model, ideal)] : [];
-        string process = efficiency < 1 ? $"{device}, η = {Units.SiText.Number(efficiency)}" : $"{device}, isentropic";
+        string process = _process ??= efficiency < 1 ? $"{device}, η = {Units.SiText.Number(efficiency)}" : $"{device}, isentropic";
         c.AddStep(process, efficiency < 1 ? PathLaw.Undefined : PathLaw.Isentropic, state, 0, w, lines: lines, assumptions: Rec.FlowAdiabatic, auxiliary: aux);
     }
 }
@@ -64,7 +66,7 @@ internal sealed class ThrottleSpec(string label, Target target) : ProcessSpec(la
         var a = c.Current.Point;
         string from = c.Current.Label, to = Label!;
         double p2 = target.Resolve(c, to, false, "pressure ratio");
-        var b = c.Compute(to, m => m.FromPH(p2, a.H));
+        var b = c.Compute(to, StateProperty.Pressure, p2, StateProperty.Enthalpy, a.H);
         ImmutableArray<RecordLine> lines = default;
         if (c.Record)
         {
@@ -81,6 +83,8 @@ internal sealed class ThrottleSpec(string label, Target target) : ProcessSpec(la
 /// </summary>
 internal sealed class RegeneratorColdSpec(string label, string hotInlet, double effectiveness, double pressureLoss) : ProcessSpec(label)
 {
+    private string? _process;
+
     public override string Describe => "regenerator, cold side";
 
     public override void Apply(SolveContext c)
@@ -105,9 +109,9 @@ internal sealed class RegeneratorColdSpec(string label, string hotInlet, double 
             throw c.Error(to, $"the regenerator's hot inlet (state {hotInlet}, T = {Units.SiText.Number(tHot)} K) is colder than its cold inlet (state {from}, T = {Units.SiText.Number(a.T)} K): no heat can be recovered.");
         }
 
-        double hIdeal = tHot > a.T ? c.Compute(to, m => m.FromTP(tHot, p2)).H : a.H;
+        double hIdeal = tHot > a.T ? c.Compute(to, StateProperty.Temperature, tHot, StateProperty.Pressure, p2).H : a.H;
         double h2 = a.H + effectiveness * (hIdeal - a.H);
-        var b = c.Compute(to, m => m.FromPH(p2, h2));
+        var b = c.Compute(to, StateProperty.Pressure, p2, StateProperty.Enthalpy, h2);
         double q = b.H - a.H;
         ImmutableArray<RecordLine> lines = default;
         if (c.Record)
@@ -124,7 +128,7 @@ internal sealed class RegeneratorColdSpec(string label, string hotInlet, double 
         c.SetUnknown("regen:" + to, b.H);
 
         // The regenerator's entropy generation is booked on its hot side, where both streams are known.
-        c.AddStep($"Regenerator, cold side, ε = {Units.SiText.Number(effectiveness)}", PathLaw.ConstantPressure, c.NewState(to, b), q, 0, tHot, heatIsInternal: true, lines: lines, assumptions: Rec.FlowHeat, entropyGenerated: 0);
+        c.AddStep(_process ??= $"Regenerator, cold side, ε = {Units.SiText.Number(effectiveness)}", PathLaw.ConstantPressure, c.NewState(to, b), q, 0, tHot, heatIsInternal: true, lines: lines, assumptions: Rec.FlowHeat, entropyGenerated: 0);
     }
 }
 
@@ -158,7 +162,7 @@ internal sealed class RegeneratorHotSpec(string label, string coldOutlet, double
 
         double coldDuty = cold.MassFraction * cold.Q;
         double h2 = a.H - coldDuty / c.Flow;
-        var b = c.Compute(to, m => m.FromPH(a.P * (1 - pressureLoss), h2));
+        var b = c.Compute(to, StateProperty.Pressure, a.P * (1 - pressureLoss), StateProperty.Enthalpy, h2);
         if (b.T < cold.From.Point.T - 1e-9 * b.T)
         {
             throw c.Error(to, $"the regenerator's hot outlet ({Units.SiText.Number(b.T)} K) would be colder than its cold inlet (state {cold.From.Label}, {Units.SiText.Number(cold.From.Point.T)} K): the effectiveness is too high for these streams.");
@@ -198,7 +202,7 @@ internal sealed class OpenFeedwaterHeaterSpec(string label, string bleedFrom) : 
             throw c.Error(to, $"an open feedwater heater needs a model with a liquid-vapour region; {c.Model.Name} has none.");
         }
 
-        var b = c.Compute(to, m => m.FromPX(a.P, 0));
+        var b = c.Compute(to, StateProperty.Pressure, a.P, StateProperty.Quality, 0);
         var bleed = c.Anywhere(bleedFrom);
         double m = c.Flow;
         double mInj = c.PreviousUnknown("inj:" + to + ":m", 0), mhInj = c.PreviousUnknown("inj:" + to + ":mh", 0), msInj = c.PreviousUnknown("inj:" + to + ":ms", 0);
@@ -289,8 +293,8 @@ internal sealed class ClosedFeedwaterHeaterSpec(string label, string bleedFrom, 
             throw c.Error(to, $"the feedwater outlet temperature T_sat(p{bleedFrom}) − TTD = {Units.SiText.Number(tOut)} K is not above the feedwater inlet {Units.SiText.Number(a.T)} K.");
         }
 
-        var fo = bleed is null ? a : c.Compute(to, mm => mm.FromTP(tOut, a.P));
-        var d = bleed is null ? a : c.Compute(to + "d", mm => mm.FromPX(pBleed, 0));
+        var fo = bleed is null ? a : c.Compute(to, StateProperty.Temperature, tOut, StateProperty.Pressure, a.P);
+        var d = bleed is null ? a : c.Compute(to + "d", StateProperty.Pressure, pBleed, StateProperty.Quality, 0);
         double mInj = c.PreviousUnknown("inj:" + to + ":m", 0), mhInj = c.PreviousUnknown("inj:" + to + ":mh", 0), msInj = c.PreviousUnknown("inj:" + to + ":ms", 0);
         double y = bleed is null ? 0 : (m * (fo.H - a.H) - (mhInj - mInj * d.H)) / (bleed.Point.H - d.H);
         if (y < 0)
@@ -310,12 +314,12 @@ internal sealed class ClosedFeedwaterHeaterSpec(string label, string bleedFrom, 
 
         if (drain == DrainRouting.PumpedForward)
         {
-            var dps = bleed is null ? a : c.Compute(to + "p", mm => mm.FromPS(a.P, d.S));
+            var dps = bleed is null ? a : c.Compute(to + "p", StateProperty.Pressure, a.P, StateProperty.Entropy, d.S);
             double hdp = d.H + (dps.H - d.H) / drainPumpEfficiency;
-            var dp = bleed is null ? a : c.Compute(to + "p", mm => mm.FromPH(a.P, hdp));
+            var dp = bleed is null ? a : c.Compute(to + "p", StateProperty.Pressure, a.P, StateProperty.Enthalpy, hdp);
             mOut = m + drainFlow;
             double hMix = (m * fo.H + drainFlow * dp.H) / mOut;
-            outlet = bleed is null ? a : c.Compute(to, mm => mm.FromPH(a.P, hMix));
+            outlet = bleed is null ? a : c.Compute(to, StateProperty.Pressure, a.P, StateProperty.Enthalpy, hMix);
             w = -drainFlow * (dp.H - d.H) / mOut;
             if (bleed is not null)
             {

@@ -22,6 +22,8 @@ internal enum HeatEnd
 /// </summary>
 internal sealed class HeatSpec(string? label, string device, PathLaw law, bool heating, HeatEnd end, double value, double? boundaryTemperature, bool regenerated, double pressureLoss, string? backTo) : ProcessSpec(label)
 {
+    private string? _process;
+
     public override bool Closes => end == HeatEnd.BackToStart;
 
     public override string Describe => (heating ? "heat addition" : "heat rejection") + (law == PathLaw.ConstantVolume ? " at constant volume" : " at constant pressure");
@@ -58,7 +60,7 @@ internal sealed class HeatSpec(string? label, string device, PathLaw law, bool h
                         : $"heat rejected must be given as a positive amount; got {Units.SiText.Number(-value / 1000)} kJ/kg.");
                 }
 
-                b = constantV ? c.Compute(to, m => m.FromVU(a.V, a.U + value)) : c.Compute(to, m => m.FromPH(p2, a.H + value));
+                b = constantV ? c.Compute(to, StateProperty.SpecificVolume, a.V, StateProperty.InternalEnergy, a.U + value) : c.Compute(to, StateProperty.Pressure, p2, StateProperty.Enthalpy, a.H + value);
                 break;
             case HeatEnd.Temperature:
                 if (!double.IsFinite(value) || (heating ? value <= a.T : value >= a.T))
@@ -66,7 +68,7 @@ internal sealed class HeatSpec(string? label, string device, PathLaw law, bool h
                     throw c.Error(to, $"the target temperature {Units.SiText.Number(value)} K must be {(heating ? "above" : "below")} the current {Units.SiText.Number(a.T)} K at state {from} for {(heating ? "heat addition" : "heat rejection")}.");
                 }
 
-                b = constantV ? c.Compute(to, m => m.FromTV(value, a.V)) : c.Compute(to, m => m.FromTP(value, p2));
+                b = constantV ? c.Compute(to, StateProperty.Temperature, value, StateProperty.SpecificVolume, a.V) : c.Compute(to, StateProperty.Temperature, value, StateProperty.Pressure, p2);
                 break;
             case HeatEnd.Pressure:
                 if (!double.IsFinite(value) || (heating ? value <= a.P : value >= a.P))
@@ -74,7 +76,7 @@ internal sealed class HeatSpec(string? label, string device, PathLaw law, bool h
                     throw c.Error(to, $"the pressure limit {Units.SiText.Pressure(value)} must be {(heating ? "above" : "below")} the current {Units.SiText.Pressure(a.P)} at state {from}.");
                 }
 
-                b = c.Compute(to, m => m.FromPV(value, a.V));
+                b = c.Compute(to, StateProperty.Pressure, value, StateProperty.SpecificVolume, a.V);
                 break;
             case HeatEnd.Volume:
             case HeatEnd.CutoffRatio:
@@ -89,7 +91,7 @@ internal sealed class HeatSpec(string? label, string device, PathLaw law, bool h
                     throw c.Error(to, $"at constant pressure, {(heating ? "heating" : "cooling")} must {(heating ? "increase" : "decrease")} the volume: v = {Units.SiText.Number(v2)} m³/kg against {Units.SiText.Number(a.V)} m³/kg at state {from}.");
                 }
 
-                b = c.Compute(to, m => m.FromPV(a.P, v2));
+                b = c.Compute(to, StateProperty.Pressure, a.P, StateProperty.SpecificVolume, v2);
                 break;
             case HeatEnd.Quality:
                 if (!(value >= 0 && value <= 1))
@@ -102,7 +104,7 @@ internal sealed class HeatSpec(string? label, string device, PathLaw law, bool h
                     throw c.Error(to, "a constant-volume process cannot end at a quality alone; give its temperature or pressure.");
                 }
 
-                b = c.Compute(to, m => m.FromPX(p2, value));
+                b = c.Compute(to, StateProperty.Pressure, p2, StateProperty.Quality, value);
                 break;
             default:
                 if (backTo is not null && backTo != c.States[0].Label)
@@ -136,7 +138,7 @@ internal sealed class HeatSpec(string? label, string device, PathLaw law, bool h
         }
 
         state = end == HeatEnd.BackToStart ? c.States[0] : c.NewState(to, b);
-        string process = (device.Length > 0 ? device + ": " : "") + (heating ? "Heat addition" : "Heat rejection") + (constantV ? " at constant volume" : pressureLoss > 0 ? $" with {Units.SiText.Number(pressureLoss * 100)} % pressure loss" : " at constant pressure");
+        string process = _process ??= (device.Length > 0 ? device + ": " : "") + (heating ? "Heat addition" : "Heat rejection") + (constantV ? " at constant volume" : pressureLoss > 0 ? $" with {Units.SiText.Number(pressureLoss * 100)} % pressure loss" : " at constant pressure");
         double entropyGenerated = double.NaN;
         double? flowAfter = null;
         double stepFlow = c.Flow;

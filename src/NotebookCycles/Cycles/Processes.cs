@@ -140,12 +140,12 @@ internal sealed class IsentropicSpec(string label, bool compression, Target targ
                 throw c.Error(to, $"an isentropic {(compression ? "compression" : "expansion")} must end {(compression ? "above" : "below")} the start temperature: T = {Units.SiText.Number(t2)} K against {Units.SiText.Number(a.T)} K at state {from}.");
             }
 
-            b = c.Compute(to, m => m.FromTS(t2, a.S));
+            b = c.Compute(to, StateProperty.Temperature, t2, StateProperty.Entropy, a.S);
         }
         else
         {
             double end = target.Resolve(c, to, compression, compression ? "compression ratio" : "expansion ratio");
-            b = target.ByPressure ? c.Compute(to, m => m.FromPS(end, a.S)) : c.Compute(to, m => m.FromVS(end, a.S));
+            b = target.ByPressure ? c.Compute(to, StateProperty.Pressure, end, StateProperty.Entropy, a.S) : c.Compute(to, StateProperty.SpecificVolume, end, StateProperty.Entropy, a.S);
         }
 
         bool closed = c.Kind == SystemKind.Closed;
@@ -227,7 +227,7 @@ internal sealed class PolytropicSpec(string label, bool compression, double n, T
         double end = target.Resolve(c, to, compression, compression ? "compression ratio" : "expansion ratio");
         double p2 = target.ByPressure ? end : a.P * Math.Pow(a.V / end, n);
         double v2 = target.ByPressure ? a.V * Math.Pow(a.P / end, 1.0 / n) : end;
-        var b = c.Compute(to, m => m.FromPV(p2, v2));
+        var b = c.Compute(to, StateProperty.Pressure, p2, StateProperty.SpecificVolume, v2);
         bool closed = c.Kind == SystemKind.Closed;
         double w = closed ? (b.P * b.V - a.P * a.V) / (1 - n) : n * (b.P * b.V - a.P * a.V) / (1 - n);
         double q = (closed ? b.U - a.U : b.H - a.H) + w;
@@ -263,7 +263,7 @@ internal sealed class IsothermalSpec(string label, bool compression, Target targ
         string from = c.Current.Label, to = Label!;
         var a = c.Current.Point;
         double end = target.Resolve(c, to, compression, compression ? "compression ratio" : "expansion ratio");
-        var b = target.ByPressure ? c.Compute(to, m => m.FromTP(a.T, end)) : c.Compute(to, m => m.FromTV(a.T, end));
+        var b = target.ByPressure ? c.Compute(to, StateProperty.Temperature, a.T, StateProperty.Pressure, end) : c.Compute(to, StateProperty.Temperature, a.T, StateProperty.SpecificVolume, end);
         bool closed = c.Kind == SystemKind.Closed;
         double q = a.T * (b.S - a.S);
         double w = q - (closed ? b.U - a.U : b.H - a.H);

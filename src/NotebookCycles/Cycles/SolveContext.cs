@@ -50,7 +50,24 @@ internal sealed class SolveContext
 
     public State Current { get; private set; } = null!;
 
-    public string CurrentStepDescription { get; set; } = "start";
+    private int _stepIndex = -1;
+    private ProcessSpec? _spec;
+    private string? _description;
+
+    /// <summary>What the solver is doing, for error messages: "step 3, heat addition at constant volume 2→3". Composed only when an error needs it.</summary>
+    public string CurrentStepDescription
+    {
+        get => _description ?? (_spec is null ? "start" : $"step {_stepIndex + 1}, {_spec.Describe} {Current.Label}→{_spec.Label ?? _states[0].Label}");
+        set => _description = value;
+    }
+
+    /// <summary>Marks the step being applied.</summary>
+    public void BeginStep(int index, ProcessSpec spec)
+    {
+        _stepIndex = index;
+        _spec = spec;
+        _description = null;
+    }
 
     /// <summary>Mass fraction of the stream leaving the current state.</summary>
     public double Flow { get; private set; }
@@ -148,12 +165,12 @@ internal sealed class SolveContext
     public CycleDefinitionException Error(string? label, string message, Exception? inner = null) =>
         new(Title, CurrentStepDescription, label, message, inner);
 
-    /// <summary>Computes a state with the model; a model error becomes a cycle error naming the step that drove the state there.</summary>
-    public StatePoint Compute(string label, Func<IPropertyModel, StatePoint> compute)
+    /// <summary>Computes a state with the model from two properties; a model error becomes a cycle error naming the step that drove the state there.</summary>
+    public StatePoint Compute(string label, StateProperty first, double firstValue, StateProperty second, double secondValue)
     {
         try
         {
-            return compute(Model);
+            return Model.Solve(first, firstValue, second, secondValue);
         }
         catch (PropertyModelException e)
         {

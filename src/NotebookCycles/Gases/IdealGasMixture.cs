@@ -38,7 +38,7 @@ namespace NotebookCycles.Gases;
 /// that misses a range end by rounding only (1e-12 relative) is taken as that end.
 /// </para>
 /// </remarks>
-public sealed class IdealGasMixture : IPropertyModel
+public sealed class IdealGasMixture : IPropertyModel, IRelativePressureModel
 {
     /// <summary>The standard-state pressure of the fits, Pa (1 bar).</summary>
     public const double StandardPressure = 100_000.0;
