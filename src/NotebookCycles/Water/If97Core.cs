@@ -253,42 +253,45 @@ internal static class If97Core
     private static Fit Liquid1(double p, double y, bool entropy, double tHigh, out StatePoint state)
     {
         double t0 = entropy ? Region1.TemperaturePS(p, y) : Region1.TemperaturePH(p, y);
-        if (!(t0 >= TMin + 1.0) && y < Value(Region1.Properties(TMin, p), entropy))
+        if (TryPolish(1, p, y, entropy, t0, TMin, tHigh, out var pr))
         {
-            state = default;
-            return Fit.Below;
+            state = pr.ToStatePoint(Phase.Liquid);
+            return Fit.Ok;
         }
 
-        state = Polish(1, p, y, entropy, t0, TMin, tHigh).ToStatePoint(Phase.Liquid);
-        return Fit.Ok;
+        // The value is below h (or s) at 273.15 K, the only way region 1 fails once y is below the saturated liquid.
+        state = default;
+        return Fit.Below;
     }
 
     /// <summary>Regions 2 and 5 from (p, h or s) above <paramref name="tLow"/> (Tsat, TB23(p) or 273.15 K).</summary>
     private static Fit Vapour25(double p, double y, bool entropy, double tLow, out StatePoint state)
     {
+        // The backward equations are not valid beyond region 2 and extrapolate wildly: a start above 1073.15 K means
+        // region 5, and a polish that finds no root in region 2 means region 5 too (or below 273.15 K at p < 611 Pa).
         double t0 = entropy ? Region2.TemperaturePS(p, y) : Region2.TemperaturePH(p, y);
-        if (!(t0 <= T25 - 2.0) && y > Value(Region2.Properties(T25, p), entropy))
+        if (!(t0 > T25 + 2.0) && TryPolish(2, p, y, entropy, t0, tLow, T25, out var pr))
         {
-            return Region5PY(p, y, entropy, double.NaN, out state);
+            state = pr.ToStatePoint(IapwsIf97.PhaseOf(2, pr.T, p, false));
+            return Fit.Ok;
         }
 
-        if (tLow == TMin && !(t0 >= TMin + 1.0) && y < Value(Region2.Properties(TMin, p), entropy))
+        if (tLow == TMin && y < Value(Region2.Properties(TMin, p), entropy))
         {
             state = default;
             return Fit.Below;
         }
 
-        var pr = Polish(2, p, y, entropy, t0, tLow, T25);
-        state = pr.ToStatePoint(IapwsIf97.PhaseOf(2, pr.T, p, false));
-        return Fit.Ok;
+        return Region5PY(p, y, entropy, double.NaN, out state);
     }
 
     /// <summary>
     /// Newton polishing on the forward Gibbs equation of <paramref name="region"/> from the backward value
-    /// <paramref name="t0"/>, until h (or s) reproduces the input to <see cref="PolishTolerance"/>; falls back to
-    /// bracketed Newton-bisection on [lo, hi] (padded) if a step leaves the bracket.
+    /// <paramref name="t0"/>, until h (or s) reproduces the input to <see cref="PolishTolerance"/> (usually one or two
+    /// steps); falls back to bracketed Newton-bisection on [lo, hi] (padded) if a step leaves the bracket. False when
+    /// the region holds no root in [lo, hi].
     /// </summary>
-    private static Props Polish(int region, double p, double y, bool entropy, double t0, double lo, double hi)
+    private static bool TryPolish(int region, double p, double y, bool entropy, double t0, double lo, double hi, out Props result)
     {
         double tol = PolishTolerance * Math.Max(Math.Abs(y), entropy ? 0.01 : 1.0);
         double t = t0;
@@ -303,15 +306,22 @@ internal static class If97Core
             double r = Value(pr, entropy) - y;
             if (Math.Abs(r) <= tol)
             {
-                return pr;
+                result = pr;
+                return true;
             }
 
             t -= r / (entropy ? pr.Cp / t : pr.Cp);
         }
 
         var f = new GibbsGap { Region = region, P = p, Target = y, Entropy = entropy };
-        double root = NewtonBisection.Solve(ref f, lo - Pad, hi + Pad, t0, "IAPWS-IF97 T(p, h or s)", 1e-14);
-        return Gibbs(region, root, p);
+        if (NewtonBisection.TrySolve(ref f, lo - Pad, hi + Pad, t0, out double root, 1e-14))
+        {
+            result = Gibbs(region, root, p);
+            return true;
+        }
+
+        result = default;
+        return false;
     }
 
     /// <summary>Region 5 from (p, h or s). Seam: <paramref name="startT"/> (NaN: interpolated start).</summary>
@@ -444,6 +454,13 @@ internal static class If97Core
         double fLo = f.Evaluate(Math.Log(pLo)), fHi = f.Evaluate(Math.Log(pHi));
 
         // s and v both fall as p rises along an isotherm (liquid water below about 277 K aside, where s rises with p).
+        double endTol = volume ? 1e-12 : 1e-12 * Math.Max(Math.Abs(y), 1.0);
+        if (!(fLo * fHi <= 0) && Math.Min(Math.Abs(fLo), Math.Abs(fHi)) <= endTol)
+        {
+            state = SinglePhaseTP(t, Math.Abs(fLo) < Math.Abs(fHi) ? pLo : pHi, liquidSide);
+            return Fit.Ok;
+        }
+
         if (!(fLo * fHi <= 0))
         {
             state = default;
@@ -502,6 +519,11 @@ internal static class If97Core
 
         var f = new IsobarVolumeGap { P = p, LnV = Math.Log(v), LiquidSide = liquidSide };
         double fLo = f.Evaluate(tLo), fHi = f.Evaluate(tHi);
+        if (!(fLo * fHi <= 0) && Math.Min(Math.Abs(fLo), Math.Abs(fHi)) <= 1e-12)
+        {
+            state = SinglePhaseTP(Math.Abs(fLo) < Math.Abs(fHi) ? tLo : tHi, p, liquidSide);
+            return Fit.Ok;
+        }
         if (!(fLo * fHi <= 0))
         {
             // Liquid near its density maximum (about 277 K): v(T) is not monotonic; look for the root above the maximum.
@@ -579,7 +601,13 @@ internal static class If97Core
         }
 
         state = default;
-        if (!Brent.TrySolve(ref f, lo, hi, out double lnp, 1e-15))
+        double fHi = f.Evaluate(hi);
+        double lnp;
+        if (Math.Abs(fHi) <= 1e-12 * Math.Max(Math.Abs(s), 1.0))
+        {
+            lnp = hi;
+        }
+        else if (!Brent.TrySolve(ref f, lo, hi, out lnp, 1e-15))
         {
             return false;
         }
@@ -611,7 +639,17 @@ internal static class If97Core
     {
         var f = new IsochoreGap { V = v, Target = y, Entropy = entropy };
         state = default;
-        if (!Brent.TrySolve(ref f, TMin, TMax, out double t, 1e-11))
+        double endTol = 1e-12 * Math.Max(Math.Abs(y), 1.0);
+        double t;
+        if (Math.Abs(f.Evaluate(TMin)) <= endTol)
+        {
+            t = TMin;
+        }
+        else if (Math.Abs(f.Evaluate(TMax)) <= endTol)
+        {
+            t = TMax;
+        }
+        else if (!Brent.TrySolve(ref f, TMin, TMax, out t, 1e-11))
         {
             return false;
         }

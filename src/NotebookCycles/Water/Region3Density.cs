@@ -12,8 +12,8 @@ internal static class Region3Density
     /// <summary>Lowest density searched, kg/m³ (below every region-3 state).</summary>
     public const double RhoLow = 40.0;
 
-    /// <summary>Highest density searched, kg/m³ (above every region-3 state).</summary>
-    public const double RhoHigh = 1100.0;
+    /// <summary>Highest density searched, kg/m³: above every region-3 state (p3 exceeds 140 MPa there) and below the density where eq. 28 turns over.</summary>
+    public const double RhoHigh = 800.0;
 
     /// <summary>Which root of p3(ρ,T) = p to take.</summary>
     public enum Branch
