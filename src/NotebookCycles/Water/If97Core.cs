@@ -73,7 +73,8 @@ internal static class If97Core
             throw new NonConvergenceException(FormattableString.Invariant($"IAPWS-IF97 region 3: no density found at T = {t} K, p = {p} MPa."));
         }
 
-        return Region3.Properties(rho, t).ToStatePoint(IapwsIf97.PhaseOf(3, t, p, liquidBranch));
+        // The density root reproduces p to about 1e-13; report the requested p itself.
+        return Region3.Properties(rho, t).ToStatePoint(IapwsIf97.PhaseOf(3, t, p, liquidBranch)) with { P = p * 1e6 };
     }
 
     // ------------------------------------------------------------ saturation
