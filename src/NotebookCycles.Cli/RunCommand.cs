@@ -82,12 +82,14 @@ internal static class Terminal
     public static IAnsiConsole For(TextWriter writer)
     {
         bool terminal = ReferenceEquals(writer, Console.Out) && !Console.IsOutputRedirected;
-        return AnsiConsole.Create(new AnsiConsoleSettings
+        var console = AnsiConsole.Create(new AnsiConsoleSettings
         {
             Out = new AnsiConsoleOutput(writer),
             Ansi = terminal ? AnsiSupport.Detect : AnsiSupport.No,
             ColorSystem = terminal ? ColorSystemSupport.Detect : ColorSystemSupport.NoColors,
             Interactive = InteractionSupport.No,
         });
+        console.Profile.Width = 240;
+        return console;
     }
 }
