@@ -95,13 +95,19 @@ public static class NotebookRunner
         }
 
         // The formatter registry is process-wide: one run at a time.
+        // The formatter registry and the working directory are process-wide: one run at a time. Cells run in the
+        // notebook's folder, as a notebook front end runs them.
         await OneAtATime.WaitAsync(cancellation).ConfigureAwait(false);
+        string previous = Environment.CurrentDirectory;
         try
         {
+            string folder = Path.GetDirectoryName(Path.GetFullPath(notebook.Path)) ?? previous;
+            Environment.CurrentDirectory = folder;
             return await RunCoreAsync(notebook, code, progress, cancellation).ConfigureAwait(false);
         }
         finally
         {
+            Environment.CurrentDirectory = previous;
             OneAtATime.Release();
         }
     }
@@ -112,7 +118,7 @@ public static class NotebookRunner
         var clock = Stopwatch.StartNew();
         Formatter.ResetToDefault();
         NotebookCyclesDisplay.Reset();
-        using var kernel = CreateKernel(notebook.Path);
+        using var kernel = CreateKernel();
         bool hasPackageCell = code.Any(Notebook.IsPackageCell);
         if (!hasPackageCell)
         {
@@ -131,6 +137,7 @@ public static class NotebookRunner
             string submission = package ? LoadExtensionCode : cell.Source;
             var cellClock = Stopwatch.StartNew();
             var outputs = new JsonArray();
+            var displayIds = new Dictionary<string, int>(StringComparer.Ordinal);
             int executionCount = ++count;
             string? error = null;
             if (!string.IsNullOrWhiteSpace(submission))
@@ -145,7 +152,7 @@ public static class NotebookRunner
                             outputs.Add(DisplayOutput(r, executionCount));
                             break;
                         case DisplayedValueUpdated u:
-                            Replace(outputs, u);
+                            Replace(outputs, displayIds, u);
                             break;
                         case StandardOutputValueProduced o:
                             AppendStream(outputs, "stdout", Text(o));
@@ -155,6 +162,11 @@ public static class NotebookRunner
                             break;
                         case DisplayedValueProduced d:
                             Capture(values, cell.Number, d.Value);
+                            if (d.ValueId is { Length: > 0 } id)
+                            {
+                                displayIds[id] = outputs.Count;
+                            }
+
                             outputs.Add(DisplayOutput(d, null));
                             break;
                         case CommandFailed f:
@@ -177,7 +189,7 @@ public static class NotebookRunner
         return new RunResult(notebook, runs, values, started, clock.Elapsed);
     }
 
-    private static CompositeKernel CreateKernel(string notebookPath)
+    private static CompositeKernel CreateKernel()
     {
         var csharp = new CSharpKernel().UseKernelHelpers().UseValueSharing();
         csharp.AddAssemblyReferences(
@@ -189,7 +201,6 @@ public static class NotebookRunner
         ]);
         var kernel = new CompositeKernel { csharp };
         kernel.DefaultKernelName = "csharp";
-        _ = notebookPath;
         return kernel;
     }
 
@@ -238,23 +249,16 @@ public static class NotebookRunner
         var output = executionCount is { } n
             ? new JsonObject { ["output_type"] = "execute_result", ["data"] = data, ["execution_count"] = n, ["metadata"] = new JsonObject() }
             : new JsonObject { ["output_type"] = "display_data", ["data"] = data, ["metadata"] = new JsonObject() };
-        if (!string.IsNullOrEmpty(e.ValueId))
-        {
-            output["metadata"]!["nbcycles_display_id"] = e.ValueId;
-        }
-
         return output;
     }
 
-    private static void Replace(JsonArray outputs, DisplayedValueUpdated update)
+    private static void Replace(JsonArray outputs, Dictionary<string, int> displayIds, DisplayedValueUpdated update)
     {
-        for (int i = 0; i < outputs.Count; i++)
+        // Display ids are transient (a front end does not store them either): kept beside the outputs during the cell.
+        if (update.ValueId is { Length: > 0 } id && displayIds.TryGetValue(id, out int index))
         {
-            if (outputs[i]?["metadata"]?["nbcycles_display_id"] is JsonValue id && id.TryGetValue(out string? s) && s == update.ValueId)
-            {
-                outputs[i] = DisplayOutput(update, null);
-                return;
-            }
+            outputs[index] = DisplayOutput(update, null);
+            return;
         }
 
         outputs.Add(DisplayOutput(update, null));
