@@ -56,6 +56,17 @@ public static class CycleHtml
         return Close(h);
     }
 
+    /// <summary>A table of any states (for example <c>cycle.States</c> or states built one by one), every state one row.</summary>
+    public static string States(IEnumerable<State> states, RenderOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(states);
+        var list = states.ToList();
+        var h = new StringBuilder(600 + 400 * list.Count);
+        Open(h, "nbc-statetable");
+        StateTable(h, list, null, (options ?? RenderOptions.Default).Units);
+        return Close(h);
+    }
+
     /// <summary>One state: a one-row table with its model.</summary>
     public static string State(State state, RenderOptions? options = null)
     {
@@ -375,6 +386,6 @@ public static class CycleHtml
         ".nbc-assume,.nbc-balance{opacity:.85}.nbc-checks{margin:.6em 0}.nbc-checks summary{cursor:pointer}" +
         ".nbc-warnings{margin:.4em 0;padding-left:1.2em}" +
         ".nbc-caution{font-size:.88em;opacity:.7;margin:.8em 0 .2em}" +
-        "@media print{.nbc{max-width:none;color:#000}.nbc-checks ul{display:block}}" +
+        "@media print{.nbc{max-width:none;color:#000}.nbc-checks::details-content{content-visibility:visible;display:block}}" +
         "</style>";
 }

@@ -18,6 +18,13 @@ public static class CycleText
         return TextReport.StateGrid(cycle.States, cycle, (options ?? RenderOptions.Default).Units).Render(false);
     }
 
+    /// <summary>A table of any states, every state one row.</summary>
+    public static string States(IEnumerable<State> states, RenderOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(states);
+        return TextReport.StateGrid(states.ToList(), null, (options ?? RenderOptions.Default).Units).Render(false);
+    }
+
     /// <summary>One state as a one-row table with its model.</summary>
     public static string State(State state, RenderOptions? options = null) => TextReport.State(state, options, markdown: false);
 

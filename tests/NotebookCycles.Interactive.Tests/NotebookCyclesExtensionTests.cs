@@ -79,6 +79,10 @@ public sealed class NotebookCyclesExtensionTests
         Assert.Contains("nbc-state", state, StringComparison.Ordinal);
         Assert.Single(Regex.Matches(state, "<tr data-state="));
 
+        string states = await session.HtmlOfAsync("c.States");
+        Assert.Equal(4, Regex.Matches(states, "<tr data-state=").Count);
+        Assert.Single(Regex.Matches(states, "<table"));
+
         string step = await session.HtmlOfAsync("c.Steps[1]");
         Assert.Contains("Heat addition at constant volume", step, StringComparison.Ordinal);
 
