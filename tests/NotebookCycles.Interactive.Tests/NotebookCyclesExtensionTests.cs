@@ -21,6 +21,15 @@ public sealed class NotebookCyclesExtensionTests
     }
 
     [Fact]
+    public async Task The_suggested_line_runs_as_shown()
+    {
+        using var session = new KernelSession();
+        await session.LoadExtensionAsync();
+        string html = await session.HtmlOfAsync(NotebookCyclesExtension.TryLine);
+        Assert.Contains("<h3 class=\"nbc-title\">Otto cycle</h3>", html, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public async Task A_cycle_displays_its_state_table_diagrams_and_record()
     {
         using var session = new KernelSession();
