@@ -47,13 +47,15 @@ public static class NotebookCyclesExtension
         }
     }
 
-    /// <summary>Registers the text/html and text/plain formatters for the library's types; display units follow <see cref="NotebookCyclesDisplay.Units"/>.</summary>
+    /// <summary>Registers the text/html and text/plain formatters for the library's types (a cycle's state list, <c>cycle.States</c>, as one table); display units follow <see cref="NotebookCyclesDisplay.Units"/>.</summary>
     public static void RegisterFormatters()
     {
         Formatter.Register<CycleResult>((r, w) => w.Write(CycleHtml.Cycle(r, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
         Formatter.Register<CycleResult>((r, w) => w.Write(CycleText.Cycle(r, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
         Formatter.Register<State>((s, w) => w.Write(CycleHtml.State(s, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
         Formatter.Register<State>((s, w) => w.Write(CycleText.State(s, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
+        Formatter.Register<System.Collections.Immutable.ImmutableArray<State>>((s, w) => w.Write(CycleHtml.States(s, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
+        Formatter.Register<System.Collections.Immutable.ImmutableArray<State>>((s, w) => w.Write(CycleText.States(s, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
         Formatter.Register<Step>((s, w) => w.Write(CycleHtml.Step(s, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
         Formatter.Register<Step>((s, w) => w.Write(CycleText.Step(s, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
         Formatter.Register<CalculationRecord>((r, w) => w.Write(CycleHtml.Record(r, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);

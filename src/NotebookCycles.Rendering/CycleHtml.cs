@@ -56,6 +56,17 @@ public static class CycleHtml
         return Close(h);
     }
 
+    /// <summary>A table of any states (for example <c>cycle.States</c> or states built one by one), every state one row.</summary>
+    public static string States(IEnumerable<State> states, RenderOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(states);
+        var list = states.ToList();
+        var h = new StringBuilder(600 + 400 * list.Count);
+        Open(h, "nbc-statetable");
+        StateTable(h, list, null, (options ?? RenderOptions.Default).Units);
+        return Close(h);
+    }
+
     /// <summary>One state: a one-row table with its model.</summary>
     public static string State(State state, RenderOptions? options = null)
     {
@@ -99,6 +110,7 @@ public static class CycleHtml
         ArgumentNullException.ThrowIfNull(comparison);
         var u = (options ?? RenderOptions.Default).Units;
         var cycles = comparison.Cycles;
+        var names = comparison.Names;
         var all = new Figure[cycles.Length][];
         for (int c = 0; c < cycles.Length; c++)
         {
@@ -107,11 +119,11 @@ public static class CycleHtml
 
         var h = new StringBuilder(6000);
         Open(h, "nbc-comparison");
-        h.Append("<h4>Comparison of ").Append(cycles.Length.ToString(CultureInfo.InvariantCulture)).Append(" cycles</h4>");
+        h.Append("<h4>").Enc(comparison.Title).Append(": ").Append(cycles.Length.ToString(CultureInfo.InvariantCulture)).Append(" cycles</h4>");
         h.Append("<table class=\"nbc-table nbc-figures\"><thead><tr><th class=\"nbc-l\">Figure</th><th class=\"nbc-l\">Unit</th>");
         for (int c = 0; c < cycles.Length; c++)
         {
-            h.Append("<th>").Enc(cycles[c].Title).Append(c == 0 ? " <span class=\"nbc-u\">(baseline)</span>" : "").Append("</th>");
+            h.Append("<th>").Enc(names[c]).Append(c == 0 ? " <span class=\"nbc-u\">(baseline)</span>" : "").Append("</th>");
             if (c > 0)
             {
                 h.Append("<th class=\"nbc-d\">Δ vs baseline</th>");
@@ -150,7 +162,7 @@ public static class CycleHtml
         h.Append("<p class=\"nbc-meta\">");
         for (int c = 0; c < cycles.Length; c++)
         {
-            h.Append(c == 0 ? "" : "<br>").Enc(cycles[c].Title).Append(": ").Enc(cycles[c].Model.Name).Append(", ").Append(cycles[c].Checks.Length.ToString(CultureInfo.InvariantCulture)).Append(" checks passed");
+            h.Append(c == 0 ? "" : "<br>").Enc(names[c]).Append(": ").Enc(cycles[c].Model.Name).Append(", ").Append(cycles[c].Checks.Length.ToString(CultureInfo.InvariantCulture)).Append(" checks passed");
         }
 
         h.Append(". Units: ").Enc(UnitText.Describe(u)).Append(".</p>");
@@ -375,6 +387,6 @@ public static class CycleHtml
         ".nbc-assume,.nbc-balance{opacity:.85}.nbc-checks{margin:.6em 0}.nbc-checks summary{cursor:pointer}" +
         ".nbc-warnings{margin:.4em 0;padding-left:1.2em}" +
         ".nbc-caution{font-size:.88em;opacity:.7;margin:.8em 0 .2em}" +
-        "@media print{.nbc{max-width:none;color:#000}.nbc-checks ul{display:block}}" +
+        "@media print{.nbc{max-width:none;color:#000}.nbc-checks::details-content{content-visibility:visible;display:block}}" +
         "</style>";
 }

@@ -254,8 +254,8 @@ public static class CycleSvg
     // Self-contained styles: palette from CSS variables (light, dark and print), text and axes in currentColor.
     private const string Style =
         "<style>" +
-        ".nbc-svg{--nbc-c0:#1f65a8;--nbc-c1:#c2410c;--nbc-c2:#2f7d32;--nbc-c3:#a21caf;--nbc-c4:#b45309;--nbc-c5:#0e7490;--nbc-dome:#6b7280;overflow:visible}" +
-        "@media (prefers-color-scheme:dark){.nbc-svg{--nbc-c0:#7cb8f2;--nbc-c1:#fb9a6a;--nbc-c2:#86d38a;--nbc-c3:#e9a3f5;--nbc-c4:#f6c36b;--nbc-c5:#67d3e8;--nbc-dome:#a1a7b3}}" +
+        ".nbc-svg{--nbc-c0:#1f65a8;--nbc-c1:#c2410c;--nbc-c2:#2f7d32;--nbc-c3:#be185d;--nbc-c4:#7c3aed;--nbc-c5:#0e7490;--nbc-dome:#6b7280;overflow:visible}" +
+        "@media (prefers-color-scheme:dark){.nbc-svg{--nbc-c0:#7cb8f2;--nbc-c1:#fb9a6a;--nbc-c2:#86d38a;--nbc-c3:#f9a8d4;--nbc-c4:#c4b5fd;--nbc-c5:#67d3e8;--nbc-dome:#a1a7b3}}" +
         "@media print{.nbc-svg{--nbc-c0:#000;--nbc-c1:#333;--nbc-c2:#000;--nbc-c3:#333;--nbc-c4:#000;--nbc-c5:#333;--nbc-dome:#555}}" +
         ".nbc-svg .nbc-frame{stroke-opacity:.7}.nbc-svg .nbc-grid{stroke:currentColor;stroke-opacity:.14;stroke-width:.6}" +
         ".nbc-svg .nbc-step{stroke-width:2;stroke-linejoin:round;stroke-linecap:round}.nbc-svg .nbc-dashed{stroke-dasharray:5 3}" +

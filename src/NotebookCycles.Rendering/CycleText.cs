@@ -18,6 +18,13 @@ public static class CycleText
         return TextReport.StateGrid(cycle.States, cycle, (options ?? RenderOptions.Default).Units).Render(false);
     }
 
+    /// <summary>A table of any states, every state one row.</summary>
+    public static string States(IEnumerable<State> states, RenderOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(states);
+        return TextReport.StateGrid(states.ToList(), null, (options ?? RenderOptions.Default).Units).Render(false);
+    }
+
     /// <summary>One state as a one-row table with its model.</summary>
     public static string State(State state, RenderOptions? options = null) => TextReport.State(state, options, markdown: false);
 
@@ -219,11 +226,12 @@ internal static class TextReport
         ArgumentNullException.ThrowIfNull(comparison);
         var u = (options ?? RenderOptions.Default).Units;
         var cycles = comparison.Cycles;
+        var names = comparison.Names;
         var head = new List<string> { "Figure", "Unit" };
         var left = new List<bool> { true, true };
         for (int c = 0; c < cycles.Length; c++)
         {
-            head.Add(c == 0 ? cycles[c].Title + " (baseline)" : cycles[c].Title);
+            head.Add(c == 0 ? names[c] + " (baseline)" : names[c]);
             left.Add(false);
             if (c > 0)
             {
@@ -255,7 +263,7 @@ internal static class TextReport
         }
 
         var t = new StringBuilder(2000);
-        Heading(t, 2, "Comparison of " + cycles.Length.ToString(CultureInfo.InvariantCulture) + " cycles", markdown);
+        Heading(t, 2, comparison.Title + ": " + cycles.Length.ToString(CultureInfo.InvariantCulture) + " cycles", markdown);
         t.Append(grid.Render(markdown)).AppendLine();
         t.Append("Units: ").Append(UnitText.Describe(u)).AppendLine(".");
         t.AppendLine(markdown ? "*" + CycleResult.Caution + "*" : CycleResult.Caution);

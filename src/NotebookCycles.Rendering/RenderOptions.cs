@@ -52,37 +52,6 @@ public sealed class CalculationRecord
     public override string ToString() => CycleText.Record(this);
 }
 
-/// <summary>Several solved cycles side by side; figures are compared against the first.</summary>
-public sealed class CycleComparison
-{
-    /// <summary>Compares <paramref name="cycles"/> (at least one; the first is the baseline).</summary>
-    public CycleComparison(IEnumerable<CycleResult> cycles)
-    {
-        ArgumentNullException.ThrowIfNull(cycles);
-        var list = cycles.ToImmutableArray();
-        if (list.Length == 0)
-        {
-            throw new ArgumentException("A comparison needs at least one cycle; the first is the baseline.", nameof(cycles));
-        }
-
-        foreach (var c in list)
-        {
-            ArgumentNullException.ThrowIfNull(c, nameof(cycles));
-        }
-
-        Cycles = list;
-    }
-
-    /// <summary>The cycles, baseline first.</summary>
-    public ImmutableArray<CycleResult> Cycles { get; }
-
-    /// <summary>Compares <paramref name="cycles"/>; the first is the baseline.</summary>
-    public static CycleComparison Of(params CycleResult[] cycles) => new(cycles);
-
-    /// <inheritdoc />
-    public override string ToString() => CycleText.Comparison(this);
-}
-
 /// <summary>Rendering shortcuts on the core types.</summary>
 public static class RenderingExtensions
 {
@@ -93,7 +62,7 @@ public static class RenderingExtensions
     public static CycleComparison CompareWith(this CycleResult cycle, params CycleResult[] others)
     {
         ArgumentNullException.ThrowIfNull(others);
-        return new CycleComparison([cycle, .. others]);
+        return CycleComparison.Of([cycle, .. others]);
     }
 
     /// <summary>The full HTML report of the cycle.</summary>

@@ -21,6 +21,15 @@ public sealed class NotebookCyclesExtensionTests
     }
 
     [Fact]
+    public async Task The_suggested_line_runs_as_shown()
+    {
+        using var session = new KernelSession();
+        await session.LoadExtensionAsync();
+        string html = await session.HtmlOfAsync(NotebookCyclesExtension.TryLine);
+        Assert.Contains("<h3 class=\"nbc-title\">Otto cycle</h3>", html, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public async Task A_cycle_displays_its_state_table_diagrams_and_record()
     {
         using var session = new KernelSession();
@@ -78,6 +87,10 @@ public sealed class NotebookCyclesExtensionTests
         string state = await session.HtmlOfAsync("c[\"3\"]");
         Assert.Contains("nbc-state", state, StringComparison.Ordinal);
         Assert.Single(Regex.Matches(state, "<tr data-state="));
+
+        string states = await session.HtmlOfAsync("c.States");
+        Assert.Equal(4, Regex.Matches(states, "<tr data-state=").Count);
+        Assert.Single(Regex.Matches(states, "<table"));
 
         string step = await session.HtmlOfAsync("c.Steps[1]");
         Assert.Contains("Heat addition at constant volume", step, StringComparison.Ordinal);

@@ -27,8 +27,9 @@ public sealed class PackagedExtensionTests
     [Fact]
     public async Task The_packed_extension_loads_through_nuget_and_formats_cycles()
     {
-        // A version of its own per run, so no earlier copy in the NuGet cache stands in for this build.
-        string version = "0.1.0-test" + DateTime.UtcNow.ToString("yyyyMMddHHmmssfff", CultureInfo.InvariantCulture);
+        // A stable version of its own per run, so no earlier copy in the NuGet cache stands in for this build, and the
+        // reference can name no version at all, as a user writes it.
+        string version = "0.1.0." + ((long)(DateTime.UtcNow - new DateTime(2026, 1, 1, 0, 0, 0, DateTimeKind.Utc)).TotalSeconds).ToString(CultureInfo.InvariantCulture);
         string feed = Path.Combine(Path.GetTempPath(), "nbc-feed-" + Guid.NewGuid().ToString("N"));
         Directory.CreateDirectory(feed);
         try
@@ -47,8 +48,10 @@ public sealed class PackagedExtensionTests
             var seen = new List<KernelEvent>();
             using (kernel.KernelEvents.Subscribe(seen.Add))
             {
-                await Submit(kernel, $"#r \"nuget: NotebookCycles.Interactive, {version}\"");
+                await Submit(kernel, "#r \"nuget: NotebookCycles.Interactive\"");
             }
+
+            Assert.Contains(seen.OfType<PackageAdded>(), e => e.PackageReference.PackageName == "NotebookCycles.Interactive" && e.PackageReference.PackageVersion == version);
 
             // The package's extension.dib ran: it said what it loaded.
             Assert.Contains(seen.OfType<DisplayEvent>().SelectMany(e => e.FormattedValues), f => f.Value.Contains("NotebookCycles loaded", StringComparison.Ordinal));

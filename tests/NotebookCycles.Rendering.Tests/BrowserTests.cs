@@ -35,6 +35,15 @@ public sealed class BrowserTests
         }
     }
 
+    [Theory]
+    [InlineData(null, null, true)]
+    [InlineData(null, "false", true)]
+    [InlineData(null, "true", false)]
+    [InlineData("/usr/bin/chromium", null, false)]
+    [InlineData("/usr/bin/chromium", "true", false)]
+    public void The_browser_test_is_skipped_only_without_a_browser_outside_CI(string? browser, string? ci, bool skipped) =>
+        Assert.Equal(skipped, ChromiumFactAttribute.SkipReason(browser, ci) is not null);
+
     private static string Page(string path, string fragment, bool dark)
     {
         string body = dark ? "<body style=\"background:#1e1e1e;color:#d4d4d4;color-scheme:dark\">" : "<body style=\"background:#fff;color:#111\">";

@@ -11,11 +11,14 @@ public sealed class ChromiumFactAttribute : FactAttribute
     /// <summary>Sets <see cref="FactAttribute.Skip"/> when no browser is found and CI is not "true".</summary>
     public ChromiumFactAttribute()
     {
-        if (Browser.Find() is null && !string.Equals(Environment.GetEnvironmentVariable("CI"), "true", StringComparison.OrdinalIgnoreCase))
-        {
-            Skip = "Headless Chromium not found (install Debian's chromium package, or set NBC_CHROMIUM to its path); required when CI=true.";
-        }
+        Skip = SkipReason(Browser.Find(), Environment.GetEnvironmentVariable("CI"));
     }
+
+    /// <summary>Why the test is skipped, or null when it runs: it runs when a browser was found, and always under CI=true.</summary>
+    internal static string? SkipReason(string? browser, string? ci) =>
+        browser is null && !string.Equals(ci, "true", StringComparison.OrdinalIgnoreCase)
+            ? "Headless Chromium not found (install Debian's chromium package, or set NBC_CHROMIUM to its path); required when CI=true."
+            : null;
 }
 
 /// <summary>Finding and running the headless browser, offline.</summary>

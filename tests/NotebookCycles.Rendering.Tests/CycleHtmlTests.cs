@@ -112,6 +112,16 @@ public sealed class CycleHtmlTests
     }
 
     [Fact]
+    public void A_list_of_states_is_one_table()
+    {
+        var cycle = TestCycles.Diesel();
+        string html = CycleHtml.States(cycle.States.Reverse());
+        Assert.Equal(cycle.States.Length, Count(html, "<tr data-state="));
+        Assert.True(html.IndexOf("data-state=\"4\"", StringComparison.Ordinal) < html.IndexOf("data-state=\"1\"", StringComparison.Ordinal));
+        Assert.Equal(cycle.States.Length + 2, CycleText.States(cycle.States).Split('\n', StringSplitOptions.RemoveEmptyEntries).Length);
+    }
+
+    [Fact]
     public void Diagrams_can_be_left_out()
     {
         string html = CycleHtml.Cycle(TestCycles.Otto(), new RenderOptions { Diagrams = false });

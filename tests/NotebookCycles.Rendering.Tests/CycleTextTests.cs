@@ -46,7 +46,7 @@ public sealed class CycleTextTests
         Assert.Contains("Otto cycle (baseline)", text, StringComparison.Ordinal);
         Assert.Contains("Diesel cycle", text, StringComparison.Ordinal);
         Assert.Contains("Δ", text, StringComparison.Ordinal);
-        Assert.Throws<ArgumentException>(() => new CycleComparison([]));
+        Assert.Throws<ArgumentException>(() => CycleComparison.Of());
     }
 
     [Fact]

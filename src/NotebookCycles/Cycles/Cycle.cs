@@ -47,20 +47,29 @@ internal sealed record Chain(string Title, SystemKind Kind, IPropertyModel Model
             throw new CycleDefinitionException(Title, "start", label, $"the chain already starts at state '{Start.Label}'.");
         }
 
-        var given = new List<(StateProperty, double)>(2);
-        if (t is { } tv) given.Add((StateProperty.Temperature, tv.Kelvins));
-        if (p is { } pv) given.Add((StateProperty.Pressure, pv.Pascals));
-        if (v is { } vv) given.Add((StateProperty.SpecificVolume, vv.CubicMetersPerKilogram));
-        if (u is { } uv) given.Add((StateProperty.InternalEnergy, uv.JoulesPerKilogram));
-        if (h is { } hv) given.Add((StateProperty.Enthalpy, hv.JoulesPerKilogram));
-        if (s is { } sv) given.Add((StateProperty.Entropy, sv.JoulesPerKilogramKelvin));
-        if (x is { } xv) given.Add((StateProperty.Quality, xv));
-        if (given.Count != 2)
+        Span<StateProperty> kinds = stackalloc StateProperty[7];
+        Span<double> values = stackalloc double[7];
+        int count = 0;
+        void Add(StateProperty kind, double value, Span<StateProperty> k, Span<double> v)
         {
-            throw new CycleDefinitionException(Title, "start", label, $"a state is fixed by exactly two independent properties; {given.Count} were given.");
+            k[count] = kind;
+            v[count] = value;
+            count++;
         }
 
-        return this with { Start = new StartSpec(label, given[0].Item1, given[0].Item2, given[1].Item1, given[1].Item2) };
+        if (t is { } tv) Add(StateProperty.Temperature, tv.Kelvins, kinds, values);
+        if (p is { } pv) Add(StateProperty.Pressure, pv.Pascals, kinds, values);
+        if (v is { } vv) Add(StateProperty.SpecificVolume, vv.CubicMetersPerKilogram, kinds, values);
+        if (u is { } uv) Add(StateProperty.InternalEnergy, uv.JoulesPerKilogram, kinds, values);
+        if (h is { } hv) Add(StateProperty.Enthalpy, hv.JoulesPerKilogram, kinds, values);
+        if (s is { } sv) Add(StateProperty.Entropy, sv.JoulesPerKilogramKelvin, kinds, values);
+        if (x is { } xv) Add(StateProperty.Quality, xv, kinds, values);
+        if (count != 2)
+        {
+            throw new CycleDefinitionException(Title, "start", label, $"a state is fixed by exactly two independent properties; {count} were given.");
+        }
+
+        return this with { Start = new StartSpec(label, kinds[0], values[0], kinds[1], values[1]) };
     }
 
     public Chain WithStart(State state)
@@ -112,19 +121,20 @@ internal sealed record Chain(string Title, SystemKind Kind, IPropertyModel Model
 
     public (HeatEnd End, double Value) HeatEndOf(string what, bool heating, SpecificEnergy? q, Temperature? toTemperature, Pressure? toPressure, SpecificVolume? toVolume, double? cutoffRatio, double? toQuality)
     {
-        var ends = new List<(HeatEnd, double)>(1);
-        if (q is { } qv) ends.Add((HeatEnd.Heat, heating ? qv.JoulesPerKilogram : -qv.JoulesPerKilogram));
-        if (toTemperature is { } tv) ends.Add((HeatEnd.Temperature, tv.Kelvins));
-        if (toPressure is { } pv) ends.Add((HeatEnd.Pressure, pv.Pascals));
-        if (toVolume is { } vv) ends.Add((HeatEnd.Volume, vv.CubicMetersPerKilogram));
-        if (cutoffRatio is { } rc) ends.Add((HeatEnd.CutoffRatio, rc));
-        if (toQuality is { } x) ends.Add((HeatEnd.Quality, x));
-        if (ends.Count != 1)
+        int count = 0;
+        (HeatEnd, double) end = default;
+        if (q is { } qv) { end = (HeatEnd.Heat, heating ? qv.JoulesPerKilogram : -qv.JoulesPerKilogram); count++; }
+        if (toTemperature is { } tv) { end = (HeatEnd.Temperature, tv.Kelvins); count++; }
+        if (toPressure is { } pv) { end = (HeatEnd.Pressure, pv.Pascals); count++; }
+        if (toVolume is { } vv) { end = (HeatEnd.Volume, vv.CubicMetersPerKilogram); count++; }
+        if (cutoffRatio is { } rc) { end = (HeatEnd.CutoffRatio, rc); count++; }
+        if (toQuality is { } x) { end = (HeatEnd.Quality, x); count++; }
+        if (count != 1)
         {
-            throw new CycleDefinitionException(Title, NextStep(what), null, $"give exactly one end of the process (q, toTemperature, toPressure, toVolume, cutoffRatio or toQuality); {ends.Count} were given.");
+            throw new CycleDefinitionException(Title, NextStep(what), null, $"give exactly one end of the process (q, toTemperature, toPressure, toVolume, cutoffRatio or toQuality); {count} were given.");
         }
 
-        return ends[0];
+        return end;
     }
 }
 

@@ -17,13 +17,40 @@ public sealed class CycleComparison
     /// <summary>The variants in the order given; the first is the baseline.</summary>
     public ImmutableArray<(string Name, CycleResult Cycle)> Variants { get; }
 
-    /// <summary>Compares named variants (at least two); the first is the baseline.</summary>
+    /// <summary>The cycles in variant order, baseline first.</summary>
+    public ImmutableArray<CycleResult> Cycles => Variants.Select(v => v.Cycle).ToImmutableArray();
+
+    /// <summary>The variant names in order, baseline first.</summary>
+    public ImmutableArray<string> Names => Variants.Select(v => v.Name).ToImmutableArray();
+
+    /// <summary>Compares cycles named by their titles (a repeated title gets " (2)", " (3)" …); the first is the baseline.</summary>
+    public static CycleComparison Of(params CycleResult[] cycles)
+    {
+        ArgumentNullException.ThrowIfNull(cycles);
+        var used = new HashSet<string>(StringComparer.Ordinal);
+        var variants = new (string, CycleResult)[cycles.Length];
+        for (int i = 0; i < cycles.Length; i++)
+        {
+            ArgumentNullException.ThrowIfNull(cycles[i], nameof(cycles));
+            string name = cycles[i].Title;
+            for (int n = 2; !used.Add(name); n++)
+            {
+                name = $"{cycles[i].Title} ({n})";
+            }
+
+            variants[i] = (name, cycles[i]);
+        }
+
+        return Of("Comparison", variants);
+    }
+
+    /// <summary>Compares named variants (at least one); the first is the baseline.</summary>
     public static CycleComparison Of(string title, params (string Name, CycleResult Cycle)[] variants)
     {
         ArgumentNullException.ThrowIfNull(variants);
-        if (variants.Length < 2)
+        if (variants.Length < 1)
         {
-            throw new ArgumentException($"A comparison needs at least two variants; {variants.Length} given.", nameof(variants));
+            throw new ArgumentException("A comparison needs at least one cycle; the first is the baseline.", nameof(variants));
         }
 
         var names = new HashSet<string>(StringComparer.Ordinal);

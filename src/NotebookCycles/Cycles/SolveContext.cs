@@ -22,7 +22,7 @@ internal sealed class SolveContext
     private readonly List<State> _states = new(8);
     private readonly List<double> _stateFlows = new(8);
     private readonly List<Step> _steps = new(8);
-    private readonly List<string> _warnings = [];
+    private List<string>? _warnings;
     private readonly Dictionary<string, double>? _previousUnknowns;
     private Dictionary<string, double>? _unknowns;
     private List<(string Label, double Fraction)>? _bleeds;
@@ -84,7 +84,7 @@ internal sealed class SolveContext
 
     public IReadOnlyList<Step> Steps => _steps;
 
-    public List<string> Warnings => _warnings;
+    public IReadOnlyList<string> Warnings => (IReadOnlyList<string>?)_warnings ?? [];
 
     public Dictionary<string, double>? Unknowns => _unknowns;
 
@@ -263,7 +263,7 @@ internal sealed class SolveContext
     {
         foreach (var w in state.Warnings)
         {
-            _warnings.Add($"State {state.Label}: {w}");
+            (_warnings ??= []).Add($"State {state.Label}: {w}");
         }
     }
 }

@@ -6,7 +6,7 @@ using Xunit;
 
 namespace NotebookCycles.Tests.Sweeps;
 
-public sealed class SweepTests
+public sealed class SweepTests(Xunit.Abstractions.ITestOutputHelper output)
 {
     private const double K = 1.4;
     private static readonly ColdAirStandard Air = ColdAirStandard.Air;
@@ -103,5 +103,18 @@ public sealed class SweepTests
         var eta = comparison.Rows.Single(r => r.Name == "Thermal efficiency");
         Assert.Equal(b.Figures.ThermalEfficiency - a.Figures.ThermalEfficiency, eta.Difference(1), 1e-15);
         Assert.DoesNotContain(comparison.Rows, r => r.Name == "Back-work ratio");
+    }
+
+    [Fact]
+    public void A_sweep_of_100000_points_without_cycles_keeps_under_50_MB()
+    {
+        long before = GC.GetTotalMemory(forceFullCollection: true);
+        var sweep = Sweep.Over("compression ratio", ParameterRange.Linear(4, 20, 100_000), Otto);
+        long after = GC.GetTotalMemory(forceFullCollection: true);
+        Assert.Equal(100_000, sweep.Points.Length);
+        Assert.All(sweep.Points, p => Assert.Null(p.Cycle));
+        output.WriteLine($"retained by a 100 000-point sweep: {(after - before) / 1048576.0:F1} MB");
+        Assert.True(after - before < 50L * 1024 * 1024, $"retained {(after - before) / 1048576.0:F1} MB");
+        GC.KeepAlive(sweep);
     }
 }
