@@ -187,6 +187,29 @@ internal static class If97Core
             if (p >= IapwsIf97.PSatMin)
             {
                 double ts = Region4.SaturationTemperature(p);
+
+                // Fast path: when the backward equation lands clearly on one side of Tsat, polish there first. The
+                // polished T is exact for the region's forward equation, and h and s rise with T, so T below Tsat
+                // (region 1) or above it (region 2) proves the phase without evaluating the saturated states.
+                if (y < (entropy ? 4.5 : 2000.0))
+                {
+                    double t1 = entropy ? Region1.TemperaturePS(p, y) : Region1.TemperaturePH(p, y);
+                    if (t1 < ts - 0.05 && t1 > TMin && TryPolish(1, p, y, entropy, t1, TMin, ts, out var fast) && fast.T < ts)
+                    {
+                        state = fast.ToStatePoint(Phase.Liquid);
+                        return Fit.Ok;
+                    }
+                }
+                else
+                {
+                    double t2 = entropy ? Region2.TemperaturePS(p, y) : Region2.TemperaturePH(p, y);
+                    if (t2 > ts + 0.05 && t2 < T25 - 2.0 && TryPolish(2, p, y, entropy, t2, ts, T25, out var fast) && fast.T > ts && fast.T <= T25)
+                    {
+                        state = fast.ToStatePoint(IapwsIf97.PhaseOf(2, fast.T, p, false));
+                        return Fit.Ok;
+                    }
+                }
+
                 if (y < (entropy ? 4.5 : 2000.0))
                 {
                     var liquid = Region1.Properties(ts, p);
@@ -296,6 +319,26 @@ internal static class If97Core
     {
         double tol = PolishTolerance * Math.Max(Math.Abs(y), entropy ? 0.01 : 1.0);
         double t = t0;
+        if (t > lo - Pad && t < hi + Pad && region != 5)
+        {
+            // First step: Halley's method on the τ-derivatives alone (cubic convergence from the backward value),
+            // so the full property evaluation that follows usually meets the tolerance at once.
+            double h, s, cp, dcp;
+            if (region == 1)
+            {
+                Region1.TemperatureDerivatives(t, p, out h, out s, out cp, out dcp);
+            }
+            else
+            {
+                Region2.TemperatureDerivatives(t, p, out h, out s, out cp, out dcp);
+            }
+
+            double r0 = (entropy ? s : h) - y;
+            double d1 = entropy ? cp / t : cp;
+            double d2 = entropy ? (dcp - cp / t) / t : dcp;
+            t -= 2.0 * r0 * d1 / (2.0 * d1 * d1 - r0 * d2);
+        }
+
         for (int i = 0; i < 4; i++)
         {
             if (!(t > lo - Pad && t < hi + Pad))
