@@ -294,7 +294,8 @@ internal static class If97Core
         // The backward equations are not valid beyond region 2 and extrapolate wildly: a start above 1073.15 K means
         // region 5, and a polish that finds no root in region 2 means region 5 too (or below 273.15 K at p < 611 Pa).
         double t0 = entropy ? Region2.TemperaturePS(p, y) : Region2.TemperaturePH(p, y);
-        if (!(t0 > T25 + 2.0) && TryPolish(2, p, y, entropy, t0, tLow, T25, out var pr))
+        bool region2Tried = !(t0 > T25 + 2.0);
+        if (region2Tried && TryPolish(2, p, y, entropy, t0, tLow, T25, out var pr))
         {
             state = pr.ToStatePoint(IapwsIf97.PhaseOf(2, pr.T, p, false));
             return Fit.Ok;
@@ -306,7 +307,19 @@ internal static class If97Core
             return Fit.Below;
         }
 
-        return Region5PY(p, y, entropy, double.NaN, out state);
+        var fit = Region5PY(p, y, entropy, double.NaN, out state);
+        if (fit == Fit.Below && !region2Tried)
+        {
+            // Below region 5 after all: the backward start (outside its range below 611 Pa) was misleading.
+            double start = Math.Min(t0, T25);
+            if (TryPolish(2, p, y, entropy, start, tLow, T25, out pr))
+            {
+                state = pr.ToStatePoint(IapwsIf97.PhaseOf(2, pr.T, p, false));
+                return Fit.Ok;
+            }
+        }
+
+        return fit;
     }
 
     /// <summary>
@@ -385,6 +398,16 @@ internal static class If97Core
         }
 
         double yl = Value(low, entropy), yh = Value(high, entropy);
+        if (y < yl)
+        {
+            // Below region 5; within the boundary sliver (region 2 and 5 differ slightly at 1073.15 K) solve on region 5 padded.
+            var edge = new GibbsGap { Region = 5, P = p, Target = y, Entropy = entropy };
+            if (!(edge.Evaluate(T25 - Pad, out _) <= 0))
+            {
+                return Fit.Below;
+            }
+        }
+
         double guess = double.IsNaN(startT) ? T25 + (TMax - T25) * (y - yl) / (yh - yl) : startT;
         var f = new GibbsGap { Region = 5, P = p, Target = y, Entropy = entropy };
         double t = NewtonBisection.Solve(ref f, T25 - Pad, TMax, guess, "IAPWS-IF97 region 5 T(p, h or s)", 1e-14);
