@@ -597,8 +597,8 @@ internal static class If97Core
             bool found = false;
             if (liquidSide || tLo == TMin)
             {
-                double prev = fLo, tPrev = tLo;
-                for (double tk = tLo + 1.0; tk <= Math.Min(tHi, 320.0); tk += 1.0)
+                double prev = fLo, tPrev = tLo, tEnd = Math.Min(tHi, 320.0);
+                for (double tk = tLo + 1.0; tk <= tEnd; tk += 1.0)
                 {
                     double fk = f.Evaluate(tk);
                     if (prev * fk <= 0)
@@ -610,6 +610,13 @@ internal static class If97Core
 
                     prev = fk;
                     tPrev = tk;
+                }
+
+                if (tPrev < tEnd && prev * f.Evaluate(tEnd) <= 0)
+                {
+                    tLo = tPrev;
+                    tHi = tEnd;
+                    found = true;
                 }
             }
 
