@@ -62,11 +62,12 @@ internal static class Region1
         TermSums.Derivatives(Basic, pa, pb, out double g, out double gi, out double gii, out double gj, out double gjj, out double gij);
 
         // Derivatives with respect to pi and tau: d/dpi = -(1/a) d/da, d/dtau = d/db.
-        double gPi = -gi / a;
-        double gPiPi = gii / (a * a);
-        double gTau = gj / b;
-        double gTauTau = gjj / (b * b);
-        double gPiTau = -gij / (a * b);
+        double invA = 1.0 / a, invB = 1.0 / b;
+        double gPi = -gi * invA;
+        double gPiPi = gii * invA * invA;
+        double gTau = gj * invB;
+        double gTauTau = gjj * invB * invB;
+        double gPiTau = -gij * invA * invB;
         return Props.FromGibbs(t, p, pi, tau, g, gPi, gPiPi, gTau, gTauTau, gPiTau);
     }
 

@@ -119,11 +119,12 @@ internal static class Region2
         Powers.Fill(b, 0, pb[..(maxJ + 1)]);
         TermSums.Derivatives(residual, pp[..(maxI + 1)], pb[..(maxJ + 1)], out double g, out double gi, out double gii, out double gj, out double gjj, out double gij);
 
-        double grPi = gi / pi;
-        double grPiPi = gii / (pi * pi);
-        double grTau = gj / b;
-        double grTauTau = gjj / (b * b);
-        double grPiTau = gij / (pi * b);
+        double invPi = 1.0 / pi, invB = 1.0 / b;
+        double grPi = gi * invPi;
+        double grPiPi = gii * invPi * invPi;
+        double grTau = gj * invB;
+        double grTauTau = gjj * invB * invB;
+        double grPiTau = gij * invPi * invB;
 
         // Combine; gamma0_pi = 1/pi, gamma0_pipi = -1/pi^2, gamma0_pitau = 0. The speed of sound uses the release's
         // residual form (Table 12), which keeps full precision at low pressure.

@@ -90,7 +90,7 @@ public sealed class IapwsIf97Tests
     public void Saturation_policy_chooses_the_saturated_phase(SaturationPolicy policy, double x)
     {
         var model = new IapwsIf97(policy);
-        Assert.Equal(policy, model.Policy);
+        Assert.Equal(policy, model.SaturationPolicy);
         foreach (double t in new[] { 300.0, 500.0, 630.0 })
         {
             var st = model.FromTP(t, model.SaturationPressure(t));
