@@ -9,7 +9,7 @@ public sealed partial class IapwsIf97
     /// <inheritdoc />
     /// <remarks>
     /// Direct evaluation of the region's basic equation (region 3: density by bracketed Newton on eq. 28). On the
-    /// saturation line (see <see cref="SaturationTolerance"/>) the <see cref="Policy"/> applies.
+    /// saturation line (see <see cref="SaturationTolerance"/>) the <see cref="SaturationPolicy"/> applies.
     /// </remarks>
     public StatePoint FromTP(double temperature, double pressure)
     {
@@ -26,7 +26,7 @@ public sealed partial class IapwsIf97
             case 3:
                 return If97Core.Region3TP(temperature, p, temperature < Region3.Tc && p > Region4.SaturationPressure(temperature), double.NaN);
             default:
-                return Policy switch
+                return SaturationPolicy switch
                 {
                     SaturationPolicy.SaturatedLiquid => If97Core.SaturatedAtT(temperature, 0.0),
                     SaturationPolicy.SaturatedVapour => If97Core.SaturatedAtT(temperature, 1.0),

@@ -16,7 +16,7 @@ namespace NotebookCycles.Water;
 /// <para>Two-phase states (region 4) mix the saturated phases by quality: v, u, h, s are lever-rule averages, while
 /// cp, cv and w are NaN (not defined for a mixture in equilibrium).</para>
 /// <para>(T, p) exactly on the saturation line (|p − psat(T)| ≤ <see cref="SaturationTolerance"/>·psat(T), psat from
-/// eq. 30) does not fix a state; <see cref="Policy"/> decides (default: throw <see cref="AmbiguousStateException"/>).</para>
+/// eq. 30) does not fix a state; <see cref="SaturationPolicy"/> decides (default: throw <see cref="AmbiguousStateException"/>).</para>
 /// <para>The metastable-vapour equation (eq. 18) is never chosen silently: call <see cref="MetastableVapourFromTP"/>.</para>
 /// The class is immutable and thread-safe; state methods do not allocate.
 /// </remarks>
@@ -46,15 +46,15 @@ public sealed partial class IapwsIf97 : ISaturationModel
     private static readonly ValidityRange TRange = new(StateProperty.Temperature, TMin, TMax);
     private static readonly ValidityRange PRange = new(StateProperty.Pressure, 0.0, PMax * 1e6);
 
-    /// <summary>Creates the model; <paramref name="policy"/> decides what a (T, p) input on the saturation line means.</summary>
-    public IapwsIf97(SaturationPolicy policy = SaturationPolicy.Throw)
+    /// <summary>Creates the model; <paramref name="saturationPolicy"/> decides what a (T, p) input on the saturation line means.</summary>
+    public IapwsIf97(SaturationPolicy saturationPolicy = SaturationPolicy.Throw)
     {
-        if (!Enum.IsDefined(policy))
+        if (!Enum.IsDefined(saturationPolicy))
         {
-            throw new ArgumentOutOfRangeException(nameof(policy), policy, "Unknown saturation policy.");
+            throw new ArgumentOutOfRangeException(nameof(saturationPolicy), saturationPolicy, "Unknown saturation policy.");
         }
 
-        Policy = policy;
+        SaturationPolicy = saturationPolicy;
         var c = Region3.Properties(Region3.RhoC, Region3.Tc);
         CriticalPoint = new StatePoint(Region3.Tc, Region3.Pc * 1e6, 1.0 / Region3.RhoC, c.U * 1e3, c.H * 1e3, c.S * 1e3, double.NaN, c.Cv * 1e3, c.W, double.NaN, Phase.Supercritical);
     }
@@ -62,8 +62,8 @@ public sealed partial class IapwsIf97 : ISaturationModel
     /// <summary>The model with the default saturation policy (<see cref="SaturationPolicy.Throw"/>).</summary>
     public static IapwsIf97 Default { get; } = new();
 
-    /// <summary>What a (T, p) input on the saturation line means.</summary>
-    public SaturationPolicy Policy { get; }
+    /// <summary>What a (T, p) input on the saturation line means (chosen at construction).</summary>
+    public SaturationPolicy SaturationPolicy { get; }
 
     /// <inheritdoc />
     public string Name => "Water and steam (IAPWS-IF97)";

@@ -187,6 +187,29 @@ internal static class If97Core
             if (p >= IapwsIf97.PSatMin)
             {
                 double ts = Region4.SaturationTemperature(p);
+
+                // Fast path: when the backward equation lands clearly on one side of Tsat, polish there first. The
+                // polished T is exact for the region's forward equation, and h and s rise with T, so T below Tsat
+                // (region 1) or above it (region 2) proves the phase without evaluating the saturated states.
+                if (y < (entropy ? 4.5 : 2000.0))
+                {
+                    double t1 = entropy ? Region1.TemperaturePS(p, y) : Region1.TemperaturePH(p, y);
+                    if (t1 < ts - 0.05 && t1 > TMin && TryPolish(1, p, y, entropy, t1, TMin, ts, out var fast) && fast.T < ts)
+                    {
+                        state = fast.ToStatePoint(Phase.Liquid);
+                        return Fit.Ok;
+                    }
+                }
+                else
+                {
+                    double t2 = entropy ? Region2.TemperaturePS(p, y) : Region2.TemperaturePH(p, y);
+                    if (t2 > ts + 0.05 && t2 < T25 - 2.0 && TryPolish(2, p, y, entropy, t2, ts, T25, out var fast) && fast.T > ts && fast.T <= T25)
+                    {
+                        state = fast.ToStatePoint(IapwsIf97.PhaseOf(2, fast.T, p, false));
+                        return Fit.Ok;
+                    }
+                }
+
                 if (y < (entropy ? 4.5 : 2000.0))
                 {
                     var liquid = Region1.Properties(ts, p);
@@ -271,7 +294,8 @@ internal static class If97Core
         // The backward equations are not valid beyond region 2 and extrapolate wildly: a start above 1073.15 K means
         // region 5, and a polish that finds no root in region 2 means region 5 too (or below 273.15 K at p < 611 Pa).
         double t0 = entropy ? Region2.TemperaturePS(p, y) : Region2.TemperaturePH(p, y);
-        if (!(t0 > T25 + 2.0) && TryPolish(2, p, y, entropy, t0, tLow, T25, out var pr))
+        bool region2Tried = !(t0 > T25 + 2.0);
+        if (region2Tried && TryPolish(2, p, y, entropy, t0, tLow, T25, out var pr))
         {
             state = pr.ToStatePoint(IapwsIf97.PhaseOf(2, pr.T, p, false));
             return Fit.Ok;
@@ -283,7 +307,19 @@ internal static class If97Core
             return Fit.Below;
         }
 
-        return Region5PY(p, y, entropy, double.NaN, out state);
+        var fit = Region5PY(p, y, entropy, double.NaN, out state);
+        if (fit == Fit.Below && !region2Tried)
+        {
+            // Below region 5 after all: the backward start (outside its range below 611 Pa) was misleading.
+            double start = Math.Min(t0, T25);
+            if (TryPolish(2, p, y, entropy, start, tLow, T25, out pr))
+            {
+                state = pr.ToStatePoint(IapwsIf97.PhaseOf(2, pr.T, p, false));
+                return Fit.Ok;
+            }
+        }
+
+        return fit;
     }
 
     /// <summary>
@@ -296,6 +332,26 @@ internal static class If97Core
     {
         double tol = PolishTolerance * Math.Max(Math.Abs(y), entropy ? 0.01 : 1.0);
         double t = t0;
+        if (t > lo - Pad && t < hi + Pad && region != 5)
+        {
+            // First step: Halley's method on the τ-derivatives alone (cubic convergence from the backward value),
+            // so the full property evaluation that follows usually meets the tolerance at once.
+            double h, s, cp, dcp;
+            if (region == 1)
+            {
+                Region1.TemperatureDerivatives(t, p, out h, out s, out cp, out dcp);
+            }
+            else
+            {
+                Region2.TemperatureDerivatives(t, p, out h, out s, out cp, out dcp);
+            }
+
+            double r0 = (entropy ? s : h) - y;
+            double d1 = entropy ? cp / t : cp;
+            double d2 = entropy ? (dcp - cp / t) / t : dcp;
+            t -= 2.0 * r0 * d1 / (2.0 * d1 * d1 - r0 * d2);
+        }
+
         for (int i = 0; i < 4; i++)
         {
             if (!(t > lo - Pad && t < hi + Pad))
@@ -342,6 +398,16 @@ internal static class If97Core
         }
 
         double yl = Value(low, entropy), yh = Value(high, entropy);
+        if (y < yl)
+        {
+            // Below region 5; within the boundary sliver (region 2 and 5 differ slightly at 1073.15 K) solve on region 5 padded.
+            var edge = new GibbsGap { Region = 5, P = p, Target = y, Entropy = entropy };
+            if (!(edge.Evaluate(T25 - Pad, out _) <= 0))
+            {
+                return Fit.Below;
+            }
+        }
+
         double guess = double.IsNaN(startT) ? T25 + (TMax - T25) * (y - yl) / (yh - yl) : startT;
         var f = new GibbsGap { Region = 5, P = p, Target = y, Entropy = entropy };
         double t = NewtonBisection.Solve(ref f, T25 - Pad, TMax, guess, "IAPWS-IF97 region 5 T(p, h or s)", 1e-14);
@@ -531,8 +597,8 @@ internal static class If97Core
             bool found = false;
             if (liquidSide || tLo == TMin)
             {
-                double prev = fLo, tPrev = tLo;
-                for (double tk = tLo + 1.0; tk <= Math.Min(tHi, 320.0); tk += 1.0)
+                double prev = fLo, tPrev = tLo, tEnd = Math.Min(tHi, 320.0);
+                for (double tk = tLo + 1.0; tk <= tEnd; tk += 1.0)
                 {
                     double fk = f.Evaluate(tk);
                     if (prev * fk <= 0)
@@ -544,6 +610,13 @@ internal static class If97Core
 
                     prev = fk;
                     tPrev = tk;
+                }
+
+                if (tPrev < tEnd && prev * f.Evaluate(tEnd) <= 0)
+                {
+                    tLo = tPrev;
+                    tHi = tEnd;
+                    found = true;
                 }
             }
 

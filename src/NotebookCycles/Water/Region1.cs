@@ -44,6 +44,10 @@ internal static class Region1
         -0.51322156908507e-9, -0.42522657042207e-25, 0.26400441360689e-12, 0.78124600459723e-28, -0.30732199903668e-30,
     ];
 
+    private static readonly TermTable Basic = new(I, J, N, 0, -41);
+    private static readonly TermTable BackwardH = new(IT, JT, NT);
+    private static readonly TermTable BackwardS = new(IS, JS, NS);
+
     /// <summary>Full property set at (T K, p MPa).</summary>
     public static Props Properties(double t, double p)
     {
@@ -55,37 +59,33 @@ internal static class Region1
         Span<double> pb = stackalloc double[59];
         Powers.Fill(a, 0, pa);
         Powers.Fill(b, -41, pb);
-        double g = 0, gi = 0, gii = 0, gj = 0, gjj = 0, gij = 0;
-        int[] ii = I, jj = J;
-        double[] nn = N;
-        for (int k = 0; k < nn.Length; k++)
-        {
-            int ik = ii[k], jk = jj[k];
-            double term = nn[k] * pa[ik] * pb[jk + 41];
-            g += term;
-            gi += ik * term;
-            gii += ik * (ik - 1) * term;
-            gj += jk * term;
-            gjj += jk * (jk - 1) * term;
-            gij += ik * jk * term;
-        }
+        TermSums.Derivatives(Basic, pa, pb, out double g, out double gi, out double gii, out double gj, out double gjj, out double gij);
 
         // Derivatives with respect to pi and tau: d/dpi = -(1/a) d/da, d/dtau = d/db.
-        double gPi = -gi / a;
-        double gPiPi = gii / (a * a);
-        double gTau = gj / b;
-        double gTauTau = gjj / (b * b);
-        double gPiTau = -gij / (a * b);
+        double invA = 1.0 / a, invB = 1.0 / b;
+        double gPi = -gi * invA;
+        double gPiPi = gii * invA * invA;
+        double gTau = gj * invB;
+        double gTauTau = gjj * invB * invB;
+        double gPiTau = -gij * invA * invB;
         return Props.FromGibbs(t, p, pi, tau, g, gPi, gPiPi, gTau, gTauTau, gPiTau);
     }
 
-    /// <summary>Specific enthalpy (kJ/kg) and cp (kJ/(kg·K)) at (T, p MPa): the cheap pair for Newton steps in T.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static double Enthalpy(double t, double p, out double cp)
+    /// <summary>h (kJ/kg), s, cp (kJ/(kg·K)) and dcp/dT at (T K, p MPa): the τ-derivatives only, for a Halley step in T.</summary>
+    public static void TemperatureDerivatives(double t, double p, out double h, out double s, out double cp, out double dcpdt)
     {
-        var pr = Properties(t, p);
-        cp = pr.Cp;
-        return pr.H;
+        double tau = TStar / t;
+        double b = tau - 1.222;
+        Span<double> pa = stackalloc double[33];
+        Span<double> pb = stackalloc double[59];
+        Powers.Fill(7.1 - p / PStar, 0, pa);
+        Powers.Fill(b, -41, pb);
+        TermSums.TauDerivatives(Basic, pa, pb, out double g, out double gj, out double gjj, out double gjjj);
+        double gTau = gj / b, gTauTau = gjj / (b * b), gTauTauTau = gjjj / (b * b * b);
+        h = Props.R * TStar * gTau;
+        s = Props.R * (tau * gTau - g);
+        cp = -Props.R * tau * tau * gTauTau;
+        dcpdt = Props.R * tau / t * (2.0 * tau * gTauTau + tau * tau * gTauTauTau);
     }
 
     /// <summary>Backward equation T(p,h), eq. 11 (p MPa, h kJ/kg).</summary>
@@ -97,13 +97,7 @@ internal static class Region1
         Span<double> pe = stackalloc double[33];
         Powers.Fill(pi, 0, pp);
         Powers.Fill(eta, 0, pe);
-        double theta = 0;
-        for (int k = 0; k < NT.Length; k++)
-        {
-            theta += NT[k] * pp[IT[k]] * pe[JT[k]];
-        }
-
-        return theta;
+        return TermSums.Value(BackwardH, pp, pe);
     }
 
     /// <summary>Backward equation T(p,s), eq. 13 (p MPa, s kJ/(kg·K)).</summary>
@@ -114,12 +108,6 @@ internal static class Region1
         Span<double> ps = stackalloc double[33];
         Powers.Fill(p, 0, pp);
         Powers.Fill(sigma, 0, ps);
-        double theta = 0;
-        for (int k = 0; k < NS.Length; k++)
-        {
-            theta += NS[k] * pp[IS[k]] * ps[JS[k]];
-        }
-
-        return theta;
+        return TermSums.Value(BackwardS, pp, ps);
     }
 }

@@ -48,14 +48,49 @@ internal static class Region2
         -0.79238375446139e-2, -0.22888160778447e-3, -0.26456501482810e-2,
     ];
 
+    private static readonly TermTable Residual = new(IR, JR, NR);
+    private static readonly TermTable ResidualMeta = new(IRMeta, JRMeta, NRMeta);
+
     /// <summary>Full property set at (T K, p MPa) from the basic equation of region 2.</summary>
-    public static Props Properties(double t, double p) => Evaluate(t, p, N0, IR, JR, NR, 24, 58);
+    public static Props Properties(double t, double p) => Evaluate(t, p, N0, Residual, 24, 58);
 
     /// <summary>Full property set at (T K, p MPa) from the metastable-vapour equation (eq. 18).</summary>
-    public static Props MetastableProperties(double t, double p) => Evaluate(t, p, N0Meta, IRMeta, JRMeta, NRMeta, 5, 16);
+    public static Props MetastableProperties(double t, double p) => Evaluate(t, p, N0Meta, ResidualMeta, 5, 16);
+
+    /// <summary>h (kJ/kg), s, cp (kJ/(kg·K)) and dcp/dT at (T K, p MPa) from the basic equation: τ-derivatives only, for a Halley step in T.</summary>
+    public static void TemperatureDerivatives(double t, double p, out double h, out double s, out double cp, out double dcpdt)
+    {
+        double tau = 540.0 / t;
+        Span<double> pt = stackalloc double[9];
+        Powers.Fill(tau, -5, pt);
+        double g0 = Math.Log(p), g0t = 0, g0tt = 0, g0ttt = 0;
+        for (int k = 0; k < 9; k++)
+        {
+            int jk = J0[k];
+            double term = N0[k] * pt[jk + 5];
+            g0 += term;
+            g0t += jk * term;
+            g0tt += jk * (jk - 1) * term;
+            g0ttt += jk * (jk - 1) * (jk - 2) * term;
+        }
+
+        double b = tau - 0.5;
+        Span<double> pp = stackalloc double[25];
+        Span<double> pb = stackalloc double[59];
+        Powers.Fill(p, 0, pp);
+        Powers.Fill(b, 0, pb);
+        TermSums.TauDerivatives(Residual, pp, pb, out double g, out double gj, out double gjj, out double gjjj);
+        double gTau = g0t / tau + gj / b;
+        double gTauTau = g0tt / (tau * tau) + gjj / (b * b);
+        double gTauTauTau = g0ttt / (tau * tau * tau) + gjjj / (b * b * b);
+        h = Props.R * 540.0 * gTau;
+        s = Props.R * (tau * gTau - (g0 + g));
+        cp = -Props.R * tau * tau * gTauTau;
+        dcpdt = Props.R * tau / t * (2.0 * tau * gTauTau + tau * tau * gTauTauTau);
+    }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static Props Evaluate(double t, double p, double[] n0, int[] ir, int[] jr, double[] nr, int maxI, int maxJ)
+    private static Props Evaluate(double t, double p, double[] n0, TermTable residual, int maxI, int maxJ)
     {
         double pi = p;
         double tau = 540.0 / t;
@@ -82,24 +117,14 @@ internal static class Region2
         Span<double> pb = stackalloc double[59];
         Powers.Fill(pi, 0, pp[..(maxI + 1)]);
         Powers.Fill(b, 0, pb[..(maxJ + 1)]);
-        double g = 0, gi = 0, gii = 0, gj = 0, gjj = 0, gij = 0;
-        for (int k = 0; k < nr.Length; k++)
-        {
-            int ik = ir[k], jk = jr[k];
-            double term = nr[k] * pp[ik] * pb[jk];
-            g += term;
-            gi += ik * term;
-            gii += ik * (ik - 1) * term;
-            gj += jk * term;
-            gjj += jk * (jk - 1) * term;
-            gij += ik * jk * term;
-        }
+        TermSums.Derivatives(residual, pp[..(maxI + 1)], pb[..(maxJ + 1)], out double g, out double gi, out double gii, out double gj, out double gjj, out double gij);
 
-        double grPi = gi / pi;
-        double grPiPi = gii / (pi * pi);
-        double grTau = gj / b;
-        double grTauTau = gjj / (b * b);
-        double grPiTau = gij / (pi * b);
+        double invPi = 1.0 / pi, invB = 1.0 / b;
+        double grPi = gi * invPi;
+        double grPiPi = gii * invPi * invPi;
+        double grTau = gj * invB;
+        double grTauTau = gjj * invB * invB;
+        double grPiTau = gij * invPi * invB;
 
         // Combine; gamma0_pi = 1/pi, gamma0_pipi = -1/pi^2, gamma0_pitau = 0. The speed of sound uses the release's
         // residual form (Table 12), which keeps full precision at low pressure.
@@ -171,6 +196,10 @@ internal static class Region2
         0.27846367088554e-4, -0.59270038474176e-3, 0.12918582991878e-2,
     ];
 
+    private static readonly TermTable TableA = new(IA, JA, NA);
+    private static readonly TermTable TableB = new(IB, JB, NB);
+    private static readonly TermTable TableC = new(IC, JC, NC, -7, 0);
+
     /// <summary>The subregion (2a = 1, 2b = 2, 2c = 3) of the backward equation T(p,h).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static int SubregionPH(double p, double h) => p <= 4.0 ? 1 : (p <= 6.5467 || h >= EnthalpyB2bc(p) ? 2 : 3);
@@ -178,25 +207,19 @@ internal static class Region2
     /// <summary>Backward equation T(p,h) for region 2 (p MPa, h kJ/kg), subregion chosen by eq. 21 and p = 4 MPa.</summary>
     public static double TemperaturePH(double p, double h) => SubregionPH(p, h) switch
     {
-        1 => SumPH(p, h / 2000.0 - 2.1, IA, JA, NA, 0, 7, 44),
-        2 => SumPH(p - 2.0, h / 2000.0 - 2.6, IB, JB, NB, 0, 9, 40),
-        _ => SumPH(p + 25.0, h / 2000.0 - 1.8, IC, JC, NC, -7, 6, 22),
+        1 => SumPH(p, h / 2000.0 - 2.1, TableA, 0, 7, 44),
+        2 => SumPH(p - 2.0, h / 2000.0 - 2.6, TableB, 0, 9, 40),
+        _ => SumPH(p + 25.0, h / 2000.0 - 1.8, TableC, -7, 6, 22),
     };
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static double SumPH(double a, double b, int[] ii, int[] jj, double[] nn, int minI, int maxI, int maxJ)
+    private static double SumPH(double a, double b, TermTable table, int minI, int maxI, int maxJ)
     {
         Span<double> pa = stackalloc double[14];
         Span<double> pb = stackalloc double[45];
         Powers.Fill(a, minI, pa[..(maxI - minI + 1)]);
         Powers.Fill(b, 0, pb[..(maxJ + 1)]);
-        double theta = 0;
-        for (int k = 0; k < nn.Length; k++)
-        {
-            theta += nn[k] * pa[ii[k] - minI] * pb[jj[k]];
-        }
-
-        return theta;
+        return TermSums.Value(table, pa, pb);
     }
 
     // ---- Backward T(p,s) ----
@@ -244,6 +267,10 @@ internal static class Region2
         0.59925719692351e-11, -0.20677870105164e-10, -0.20874278181886e-10, 0.10162166825089e-9, -0.16429828281347e-9,
     ];
 
+    private static readonly TermTable TableAS = new(IA4, JAS, NAS, -6, -27);
+    private static readonly TermTable TableBS = new(IBS, JBS, NBS, -6, 0);
+    private static readonly TermTable TableCS = new(ICS, JCS, NCS, -2, 0);
+
     /// <summary>The subregion (2a = 1, 2b = 2, 2c = 3) of the backward equation T(p,s): p = 4 MPa and s = 5.85 kJ/(kg·K).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static int SubregionPS(double p, double s) => p <= 4.0 ? 1 : (s >= 5.85 ? 2 : 3);
@@ -261,35 +288,23 @@ internal static class Region2
                 Powers.Fill(q, -6, pq);
                 Span<double> ps = stackalloc double[46];
                 Powers.Fill(s / 2.0 - 2.0, -27, ps);
-                double theta = 0;
-                for (int k = 0; k < NAS.Length; k++)
-                {
-                    theta += NAS[k] * pq[IA4[k] + 6] * ps[JAS[k] + 27];
-                }
-
-                return theta;
+                return TermSums.Value(TableAS, pq, ps);
             }
 
             case 2:
-                return SumPS(p, 10.0 - s / 0.7853, IBS, JBS, NBS, -6, 5, 12);
+                return SumPS(p, 10.0 - s / 0.7853, TableBS, -6, 5, 12);
             default:
-                return SumPS(p, 2.0 - s / 2.9251, ICS, JCS, NCS, -2, 7, 5);
+                return SumPS(p, 2.0 - s / 2.9251, TableCS, -2, 7, 5);
         }
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static double SumPS(double pi, double b, int[] ii, int[] jj, double[] nn, int minI, int maxI, int maxJ)
+    private static double SumPS(double pi, double b, TermTable table, int minI, int maxI, int maxJ)
     {
         Span<double> pa = stackalloc double[12];
         Span<double> pb = stackalloc double[13];
         Powers.Fill(pi, minI, pa[..(maxI - minI + 1)]);
         Powers.Fill(b, 0, pb[..(maxJ + 1)]);
-        double theta = 0;
-        for (int k = 0; k < nn.Length; k++)
-        {
-            theta += nn[k] * pa[ii[k] - minI] * pb[jj[k]];
-        }
-
-        return theta;
+        return TermSums.Value(table, pa, pb);
     }
 }

@@ -30,6 +30,8 @@ internal static class Region3
         0.32308904703711e-2, 0.80964802996215e-4, -0.16557679795037e-3, -0.44923899061815e-4,
     ];
 
+    private static readonly TermTable Terms = new(I, J, N);
+
     /// <summary>The dimensionless Helmholtz sums at (ρ, T): φ, δφ_δ, δ²φ_δδ, τφ_τ, τ²φ_ττ, δτφ_δτ.</summary>
     public static void Sums(double rho, double t, out double phi, out double dPd, out double d2Pdd, out double tPt, out double t2Ptt, out double dtPdt)
     {
@@ -39,19 +41,7 @@ internal static class Region3
         Span<double> pt = stackalloc double[27];
         Powers.Fill(delta, 0, pd);
         Powers.Fill(tau, 0, pt);
-        double f = 0, fi = 0, fii = 0, fj = 0, fjj = 0, fij = 0;
-        for (int k = 0; k < N.Length; k++)
-        {
-            int ik = I[k], jk = J[k];
-            double term = N[k] * pd[ik] * pt[jk];
-            f += term;
-            fi += ik * term;
-            fii += ik * (ik - 1) * term;
-            fj += jk * term;
-            fjj += jk * (jk - 1) * term;
-            fij += ik * jk * term;
-        }
-
+        TermSums.Derivatives(Terms, pd, pt, out double f, out double fi, out double fii, out double fj, out double fjj, out double fij);
         phi = N1 * Math.Log(delta) + f;
         dPd = N1 + fi;
         d2Pdd = -N1 + fii;

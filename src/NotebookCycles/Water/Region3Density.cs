@@ -86,6 +86,13 @@ internal static class Region3Density
             guess = 0.5 * (lo + hi);
         }
 
-        return NewtonBisection.TrySolve(ref f, lo, hi, guess, out double rho, 1e-13, 200) ? rho : double.NaN;
+        if (NewtonBisection.TrySolve(ref f, lo, hi, guess, out double rho, 1e-13, 200))
+        {
+            return rho;
+        }
+
+        // Within about 0.01 K of Tc the loop is lower than the tiny disagreement between eq. 30 and eq. 28, so the
+        // branch may hold no root at psat; the one root of the whole isotherm is then taken for it.
+        return branch != Branch.Single && t > Region3.Tc - 0.01 ? Solve(p, t, Branch.Single, start) : double.NaN;
     }
 }

@@ -44,11 +44,4 @@ internal static class Region4
         double sum = N10 + d;
         return 0.5 * (sum - Math.Sqrt(sum * sum - 4.0 * (N9 + N10 * d)));
     }
-
-    /// <summary>dpsat/dT (MPa/K) by differentiating eq. 30 (central difference on the smooth closed form).</summary>
-    public static double SaturationPressureSlope(double t)
-    {
-        double dt = 1e-4 * t * 1e-2;
-        return (SaturationPressure(t + dt) - SaturationPressure(t - dt)) / (2 * dt);
-    }
 }

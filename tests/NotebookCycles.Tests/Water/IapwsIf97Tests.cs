@@ -90,7 +90,7 @@ public sealed class IapwsIf97Tests
     public void Saturation_policy_chooses_the_saturated_phase(SaturationPolicy policy, double x)
     {
         var model = new IapwsIf97(policy);
-        Assert.Equal(policy, model.Policy);
+        Assert.Equal(policy, model.SaturationPolicy);
         foreach (double t in new[] { 300.0, 500.0, 630.0 })
         {
             var st = model.FromTP(t, model.SaturationPressure(t));
@@ -146,6 +146,26 @@ public sealed class IapwsIf97Tests
             Assert.True(Math.Abs(gl - gv) / (461.526 * t) < 1e-5, $"T = {t} K: Δg/RT = {(gl - gv) / (461.526 * t):E2}");
             Assert.True(l.V < 1.0 / 322.0 && v.V > 1.0 / 322.0);
         }
+    }
+
+    [Theory]
+    [InlineData(647.0)]
+    [InlineData(647.09)]
+    [InlineData(647.0959)]
+    [InlineData(647.09599)]
+    [InlineData(647.096)]
+    public void Saturated_states_exist_up_to_the_critical_temperature(double t)
+    {
+        var l = Steam.FromTX(t, 0);
+        var v = Steam.FromTX(t, 1);
+        Assert.True(l.V <= v.V, $"v' = {l.V}, v'' = {v.V}");
+        if (t <= 647.0959)
+        {
+            // Liquid denser than critical, vapour lighter (ρc = 322 kg/m³, R7-97(2012) eq. 4). Closer to Tc than about
+            // 0.01 K both phases take the single root of the isotherm (see the model docs).
+            Assert.True(l.V < 1.0 / 322.0 && v.V > 1.0 / 322.0, $"v' = {l.V}, v'' = {v.V}");
+        }
+        Assert.Equal(Steam.SaturationPressure(t), l.P, 1e-9 * l.P); // at Tc itself p = pc, which eq. 30 meets to about 1e-10
     }
 
     [Fact]
