@@ -65,18 +65,6 @@ public static class CaptureJson
             case Rendering.CalculationRecord record:
                 RecordJson.WriteCycle(json, record.Cycle);
                 break;
-            case Rendering.CycleComparison comparison:
-                json.WriteStartObject();
-                json.WriteString("kind", "comparison");
-                json.WriteStartArray("cycles");
-                foreach (var c in comparison.Cycles)
-                {
-                    RecordJson.WriteCycle(json, c);
-                }
-
-                json.WriteEndArray();
-                json.WriteEndObject();
-                break;
             case Cycles.CycleComparison comparison:
                 json.WriteStartObject();
                 json.WriteString("kind", "comparison");

@@ -4,7 +4,6 @@ using Microsoft.DotNet.Interactive.Formatting;
 using NotebookCycles.Cycles;
 using NotebookCycles.Properties;
 using NotebookCycles.Rendering;
-using CycleComparison = NotebookCycles.Rendering.CycleComparison;
 
 namespace NotebookCycles.Interactive;
 
