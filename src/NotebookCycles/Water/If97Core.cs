@@ -1,0 +1,745 @@
+using System.Runtime.CompilerServices;
+using NotebookCycles.Numerics;
+using NotebookCycles.Properties;
+
+namespace NotebookCycles.Water;
+
+/// <summary>Where a requested value lies relative to what the formulation can reach at the other input.</summary>
+internal enum Fit
+{
+    /// <summary>Solved.</summary>
+    Ok,
+
+    /// <summary>The value is below the reachable range.</summary>
+    Below,
+
+    /// <summary>The value is above the reachable range.</summary>
+    Above,
+}
+
+/// <summary>
+/// The solvers behind <see cref="IapwsIf97"/>, in the release's units (MPa, K, kJ/kg, kJ/(kg·K)), returning SI state
+/// points. They do not validate inputs (the model does) and report unreachable values as <see cref="Fit"/>.
+/// Each flash has one method taking a starting value: the seam where backward equations plug in.
+/// </summary>
+internal static class If97Core
+{
+    private const double T13 = IapwsIf97.T13;
+    private const double T25 = IapwsIf97.T25;
+    private const double TMin = IapwsIf97.TMin;
+    private const double TMax = IapwsIf97.TMax;
+
+    /// <summary>Boundary padding (K) of the bracketed solvers: adjacent regions' equations differ slightly on their common boundary.</summary>
+    private const double Pad = 0.05;
+
+    /// <summary>Relative residual the Newton polishing after a backward equation stops at.</summary>
+    internal const double PolishTolerance = 1e-11;
+
+    // ------------------------------------------------------------ forward equations
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static Props Gibbs(int region, double t, double p) => region switch
+    {
+        1 => Region1.Properties(t, p),
+        2 => Region2.Properties(t, p),
+        _ => Region5.Properties(t, p),
+    };
+
+    /// <summary>Single-phase state at (T, p) with the region chosen by the release; on the saturation line the side is <paramref name="liquidSide"/>.</summary>
+    internal static StatePoint SinglePhaseTP(double t, double p, bool liquidSide, double startRho = double.NaN)
+    {
+        int region = IapwsIf97.RegionOfTP(t, p);
+        if (region == 4)
+        {
+            region = t <= T13 ? (liquidSide ? 1 : 2) : 3;
+        }
+
+        if (region == 3)
+        {
+            bool liquid = t < Region3.Tc && (p > Region4.SaturationPressure(t) || (liquidSide && IapwsIf97.OnSaturation(p, Region4.SaturationPressure(t))));
+            return Region3TP(t, p, liquid, startRho);
+        }
+
+        return Gibbs(region, t, p).ToStatePoint(IapwsIf97.PhaseOf(region, t, p, liquidSide));
+    }
+
+    /// <summary>Region-3 state from (T, p): density by bracketed Newton on eq. 28. Seam: <paramref name="startRho"/> (a v(p,T) backward value).</summary>
+    internal static StatePoint Region3TP(double t, double p, bool liquidBranch, double startRho)
+    {
+        var branch = t >= Region3.Tc ? Region3Density.Branch.Single : (liquidBranch ? Region3Density.Branch.Liquid : Region3Density.Branch.Vapour);
+        double rho = Region3Density.Solve(p, t, branch, startRho);
+        if (double.IsNaN(rho))
+        {
+            throw new NonConvergenceException(FormattableString.Invariant($"IAPWS-IF97 region 3: no density found at T = {t} K, p = {p} MPa."));
+        }
+
+        // The density root reproduces p to about 1e-13; report the requested p itself.
+        return Region3.Properties(rho, t).ToStatePoint(IapwsIf97.PhaseOf(3, t, p, liquidBranch)) with { P = p * 1e6 };
+    }
+
+    // ------------------------------------------------------------ saturation
+
+    /// <summary>The saturated phases at T with saturation pressure p (MPa).</summary>
+    internal static void SaturatedPhases(double t, double p, out Props liquid, out Props vapour)
+    {
+        if (t <= T13)
+        {
+            liquid = Region1.Properties(t, p);
+            vapour = Region2.Properties(t, p);
+            return;
+        }
+
+        if (t >= Region3.Tc)
+        {
+            liquid = Region3.Properties(Region3.RhoC, Region3.Tc);
+            vapour = liquid;
+            return;
+        }
+
+        double rl = Region3Density.Solve(p, t, Region3Density.Branch.Liquid);
+        double rv = Region3Density.Solve(p, t, Region3Density.Branch.Vapour);
+        if (double.IsNaN(rl) || double.IsNaN(rv))
+        {
+            throw new NonConvergenceException(FormattableString.Invariant($"IAPWS-IF97 region 3: saturated densities not found at T = {t} K, p = {p} MPa."));
+        }
+
+        if (rl < rv)
+        {
+            // Only within microkelvins of Tc, where a branch fell back to the isotherm's single root: one density for both.
+            rl = rv = Region3Density.Solve(p, t, Region3Density.Branch.Single);
+        }
+
+        liquid = Region3.Properties(rl, t);
+        vapour = Region3.Properties(rv, t);
+    }
+
+    /// <summary>The two-phase mixture of quality x (cp, cv, w NaN).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static StatePoint Mix(in Props liquid, in Props vapour, double x, double t, double p)
+    {
+        double v = liquid.V + x * (vapour.V - liquid.V);
+        double u = liquid.U + x * (vapour.U - liquid.U);
+        double h = liquid.H + x * (vapour.H - liquid.H);
+        double s = liquid.S + x * (vapour.S - liquid.S);
+        return new StatePoint(t, p * 1e6, v, u * 1e3, h * 1e3, s * 1e3, double.NaN, double.NaN, double.NaN, x, Phase.TwoPhase);
+    }
+
+    /// <summary>Saturated state of quality x at T (K).</summary>
+    internal static StatePoint SaturatedAtT(double t, double x)
+    {
+        double p = t >= Region3.Tc ? Region3.Pc : Region4.SaturationPressure(t);
+        SaturatedPhases(t, p, out var liquid, out var vapour);
+        return Mix(liquid, vapour, x, t, p);
+    }
+
+    /// <summary>Saturated state of quality x at p (MPa).</summary>
+    internal static StatePoint SaturatedAtP(double p, double x)
+    {
+        double t = p >= Region3.Pc ? Region3.Tc : Region4.SaturationTemperature(p);
+        SaturatedPhases(t, p, out var liquid, out var vapour);
+        return Mix(liquid, vapour, x, t, p);
+    }
+
+    // ------------------------------------------------------------ (p,h) and (p,s)
+
+    private struct GibbsGap : IDifferentiableFunction
+    {
+        public int Region;
+        public double P;
+        public double Target;
+        public bool Entropy;
+
+        public readonly double Evaluate(double t, out double derivative)
+        {
+            var pr = Gibbs(Region, t, P);
+            derivative = Entropy ? pr.Cp / t : pr.Cp;
+            return (Entropy ? pr.S : pr.H) - Target;
+        }
+    }
+
+    private struct Region3Gap : IDifferentiableFunction
+    {
+        public double P;
+        public double Target;
+        public bool Entropy;
+        public bool LiquidSide;
+        public double Rho;
+
+        public double Evaluate(double t, out double derivative)
+        {
+            var branch = t >= Region3.Tc ? Region3Density.Branch.Single : (LiquidSide ? Region3Density.Branch.Liquid : Region3Density.Branch.Vapour);
+            double rho = Region3Density.Solve(P, t, branch, Rho);
+            if (double.IsNaN(rho))
+            {
+                derivative = double.NaN;
+                return double.NaN;
+            }
+
+            Rho = rho;
+            var pr = Region3.Properties(rho, t);
+            derivative = Entropy ? pr.Cp / t : pr.Cp;
+            return (Entropy ? pr.S : pr.H) - Target;
+        }
+    }
+
+    /// <summary>
+    /// State from (p MPa, h kJ/kg) or, with <paramref name="entropy"/>, from (p MPa, s kJ/(kg·K)). Regions 1 and 2: backward
+    /// equation, then Newton on the forward equation; region 3 and 5: bracketed Newton; the dome: lever rule.
+    /// </summary>
+    internal static Fit SolvePY(double p, double y, bool entropy, out StatePoint state)
+    {
+        if (p < IapwsIf97.PSat13)
+        {
+            if (p >= IapwsIf97.PSatMin)
+            {
+                double ts = Region4.SaturationTemperature(p);
+
+                // Fast path: when the backward equation lands clearly on one side of Tsat, polish there first. The
+                // polished T is exact for the region's forward equation, and h and s rise with T, so T below Tsat
+                // (region 1) or above it (region 2) proves the phase without evaluating the saturated states.
+                if (y < (entropy ? 4.5 : 2000.0))
+                {
+                    double t1 = entropy ? Region1.TemperaturePS(p, y) : Region1.TemperaturePH(p, y);
+                    if (t1 < ts - 0.05 && t1 > TMin && TryPolish(1, p, y, entropy, t1, TMin, ts, out var fast) && fast.T < ts)
+                    {
+                        state = fast.ToStatePoint(Phase.Liquid);
+                        return Fit.Ok;
+                    }
+                }
+                else
+                {
+                    double t2 = entropy ? Region2.TemperaturePS(p, y) : Region2.TemperaturePH(p, y);
+                    if (t2 > ts + 0.05 && t2 < T25 - 2.0 && TryPolish(2, p, y, entropy, t2, ts, T25, out var fast) && fast.T > ts && fast.T <= T25)
+                    {
+                        state = fast.ToStatePoint(IapwsIf97.PhaseOf(2, fast.T, p, false));
+                        return Fit.Ok;
+                    }
+                }
+
+                if (y < (entropy ? 4.5 : 2000.0))
+                {
+                    var liquid = Region1.Properties(ts, p);
+                    if (y < Value(liquid, entropy))
+                    {
+                        return Liquid1(p, y, entropy, ts, out state);
+                    }
+
+                    var vapour = Region2.Properties(ts, p);
+                    if (y <= Value(vapour, entropy))
+                    {
+                        state = Mix(liquid, vapour, Quality(liquid, vapour, y, entropy), ts, p);
+                        return Fit.Ok;
+                    }
+
+                    return Vapour25(p, y, entropy, ts, out state);
+                }
+                else
+                {
+                    var vapour = Region2.Properties(ts, p);
+                    if (y > Value(vapour, entropy))
+                    {
+                        return Vapour25(p, y, entropy, ts, out state);
+                    }
+
+                    var liquid = Region1.Properties(ts, p);
+                    if (y >= Value(liquid, entropy))
+                    {
+                        state = Mix(liquid, vapour, Quality(liquid, vapour, y, entropy), ts, p);
+                        return Fit.Ok;
+                    }
+
+                    return Liquid1(p, y, entropy, ts, out state);
+                }
+            }
+
+            return Vapour25(p, y, entropy, TMin, out state);
+        }
+
+        if (y <= Value(Region1.Properties(T13, p), entropy))
+        {
+            return Liquid1(p, y, entropy, T13, out state);
+        }
+
+        double tb = Region3.TemperatureB23(p);
+        if (y >= Value(Region2.Properties(tb, p), entropy))
+        {
+            return Vapour25(p, y, entropy, tb, out state);
+        }
+
+        return Region3PY(p, y, entropy, double.NaN, out state);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static double Value(in Props pr, bool entropy) => entropy ? pr.S : pr.H;
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static double Quality(in Props liquid, in Props vapour, double y, bool entropy)
+    {
+        double x = (y - Value(liquid, entropy)) / (Value(vapour, entropy) - Value(liquid, entropy));
+        return Math.Clamp(x, 0.0, 1.0); // rounding only: y is already known to lie between the two values
+    }
+
+    /// <summary>Region 1 from (p, h or s) below <paramref name="tHigh"/> (Tsat or 623.15 K).</summary>
+    private static Fit Liquid1(double p, double y, bool entropy, double tHigh, out StatePoint state)
+    {
+        double t0 = entropy ? Region1.TemperaturePS(p, y) : Region1.TemperaturePH(p, y);
+        if (TryPolish(1, p, y, entropy, t0, TMin, tHigh, out var pr))
+        {
+            state = pr.ToStatePoint(Phase.Liquid);
+            return Fit.Ok;
+        }
+
+        // The value is below h (or s) at 273.15 K, the only way region 1 fails once y is below the saturated liquid.
+        state = default;
+        return Fit.Below;
+    }
+
+    /// <summary>Regions 2 and 5 from (p, h or s) above <paramref name="tLow"/> (Tsat, TB23(p) or 273.15 K).</summary>
+    private static Fit Vapour25(double p, double y, bool entropy, double tLow, out StatePoint state)
+    {
+        // The backward equations are not valid beyond region 2 and extrapolate wildly: a start above 1073.15 K means
+        // region 5, and a polish that finds no root in region 2 means region 5 too (or below 273.15 K at p < 611 Pa).
+        double t0 = entropy ? Region2.TemperaturePS(p, y) : Region2.TemperaturePH(p, y);
+        bool region2Tried = !(t0 > T25 + 2.0);
+        if (region2Tried && TryPolish(2, p, y, entropy, t0, tLow, T25, out var pr))
+        {
+            state = pr.ToStatePoint(IapwsIf97.PhaseOf(2, pr.T, p, false));
+            return Fit.Ok;
+        }
+
+        if (tLow == TMin && y < Value(Region2.Properties(TMin, p), entropy))
+        {
+            state = default;
+            return Fit.Below;
+        }
+
+        var fit = Region5PY(p, y, entropy, double.NaN, out state);
+        if (fit == Fit.Below && !region2Tried)
+        {
+            // Below region 5 after all: the backward start (outside its range below 611 Pa) was misleading.
+            double start = Math.Min(t0, T25);
+            if (TryPolish(2, p, y, entropy, start, tLow, T25, out pr))
+            {
+                state = pr.ToStatePoint(IapwsIf97.PhaseOf(2, pr.T, p, false));
+                return Fit.Ok;
+            }
+        }
+
+        return fit;
+    }
+
+    /// <summary>
+    /// Newton polishing on the forward Gibbs equation of <paramref name="region"/> from the backward value
+    /// <paramref name="t0"/>, until h (or s) reproduces the input to <see cref="PolishTolerance"/> (usually one or two
+    /// steps); falls back to bracketed Newton-bisection on [lo, hi] (padded) if a step leaves the bracket. False when
+    /// the region holds no root in [lo, hi].
+    /// </summary>
+    private static bool TryPolish(int region, double p, double y, bool entropy, double t0, double lo, double hi, out Props result)
+    {
+        double tol = PolishTolerance * Math.Max(Math.Abs(y), entropy ? 0.01 : 1.0);
+        double t = t0;
+        if (t > lo - Pad && t < hi + Pad && region != 5)
+        {
+            // First step: Halley's method on the τ-derivatives alone (cubic convergence from the backward value),
+            // so the full property evaluation that follows usually meets the tolerance at once.
+            double h, s, cp, dcp;
+            if (region == 1)
+            {
+                Region1.TemperatureDerivatives(t, p, out h, out s, out cp, out dcp);
+            }
+            else
+            {
+                Region2.TemperatureDerivatives(t, p, out h, out s, out cp, out dcp);
+            }
+
+            double r0 = (entropy ? s : h) - y;
+            double d1 = entropy ? cp / t : cp;
+            double d2 = entropy ? (dcp - cp / t) / t : dcp;
+            t -= 2.0 * r0 * d1 / (2.0 * d1 * d1 - r0 * d2);
+        }
+
+        for (int i = 0; i < 4; i++)
+        {
+            if (!(t > lo - Pad && t < hi + Pad))
+            {
+                break;
+            }
+
+            var pr = Gibbs(region, t, p);
+            double r = Value(pr, entropy) - y;
+            if (Math.Abs(r) <= tol)
+            {
+                result = pr;
+                return true;
+            }
+
+            t -= r / (entropy ? pr.Cp / t : pr.Cp);
+        }
+
+        var f = new GibbsGap { Region = region, P = p, Target = y, Entropy = entropy };
+        if (NewtonBisection.TrySolve(ref f, lo - Pad, hi + Pad, t0, out double root, 1e-14))
+        {
+            result = Gibbs(region, root, p);
+            return true;
+        }
+
+        result = default;
+        return false;
+    }
+
+    /// <summary>Region 5 from (p, h or s). Seam: <paramref name="startT"/> (NaN: interpolated start).</summary>
+    private static Fit Region5PY(double p, double y, bool entropy, double startT, out StatePoint state)
+    {
+        state = default;
+        if (p > IapwsIf97.PMax5)
+        {
+            return Fit.Above;
+        }
+
+        var low = Region5.Properties(T25, p);
+        var high = Region5.Properties(TMax, p);
+        if (y > Value(high, entropy))
+        {
+            return Fit.Above;
+        }
+
+        double yl = Value(low, entropy), yh = Value(high, entropy);
+        if (y < yl)
+        {
+            // Below region 5; within the boundary sliver (region 2 and 5 differ slightly at 1073.15 K) solve on region 5 padded.
+            var edge = new GibbsGap { Region = 5, P = p, Target = y, Entropy = entropy };
+            if (!(edge.Evaluate(T25 - Pad, out _) <= 0))
+            {
+                return Fit.Below;
+            }
+        }
+
+        double guess = double.IsNaN(startT) ? T25 + (TMax - T25) * (y - yl) / (yh - yl) : startT;
+        var f = new GibbsGap { Region = 5, P = p, Target = y, Entropy = entropy };
+        double t = NewtonBisection.Solve(ref f, T25 - Pad, TMax, guess, "IAPWS-IF97 region 5 T(p, h or s)", 1e-14);
+        state = Region5.Properties(t, p).ToStatePoint(IapwsIf97.PhaseOf(5, t, p, false));
+        return Fit.Ok;
+    }
+
+    /// <summary>
+    /// Region 3 from (p, h or s), p ≥ psat(623.15 K): bracketed Newton in T on the forward Helmholtz equation, with the
+    /// density solved at each T. Seam: <paramref name="startT"/> (an SR3-03 T3(p,h) or T3(p,s) value; NaN: none).
+    /// </summary>
+    internal static Fit Region3PY(double p, double y, bool entropy, double startT, out StatePoint state)
+    {
+        double tb = Region3.TemperatureB23(p);
+        double lo = T13 - Pad, hi = tb + Pad;
+        bool liquidSide = true;
+        if (p < Region3.Pc)
+        {
+            double ts = Region4.SaturationTemperature(p);
+            SaturatedPhases(ts, p, out var liquid, out var vapour);
+            double yl = Value(liquid, entropy), yv = Value(vapour, entropy);
+            if (y >= yl && y <= yv)
+            {
+                state = Mix(liquid, vapour, Quality(liquid, vapour, y, entropy), ts, p);
+                return Fit.Ok;
+            }
+
+            if (y < yl)
+            {
+                hi = ts;
+            }
+            else
+            {
+                lo = ts;
+                liquidSide = false;
+            }
+        }
+
+        var f = new Region3Gap { P = p, Target = y, Entropy = entropy, LiquidSide = liquidSide, Rho = double.NaN };
+        double guess = double.IsNaN(startT) ? 0.5 * (lo + hi) : startT;
+        double t = NewtonBisection.Solve(ref f, lo, hi, guess, "IAPWS-IF97 region 3 T(p, h or s)", 1e-14);
+        state = Region3TP(t, p, liquidSide, f.Rho);
+        return Fit.Ok;
+    }
+
+    // ------------------------------------------------------------ (T, y) with y = s or v, by iteration in ln p
+
+    private struct IsothermGap : IScalarFunction
+    {
+        public double T;
+        public double Target;
+        public bool Volume;
+        public bool LiquidSide;
+
+        public readonly double Evaluate(double lnp)
+        {
+            var st = SinglePhaseTP(T, Math.Exp(lnp), LiquidSide);
+            return Volume ? Math.Log(st.V) - Target : st.S * 1e-3 - Target;
+        }
+    }
+
+    /// <summary>State from (T K, s kJ/(kg·K)) or (T K, v m³/kg) with <paramref name="volume"/>.</summary>
+    internal static Fit SolveTY(double t, double y, bool volume, out StatePoint state)
+    {
+        double pMax = t > T25 ? IapwsIf97.PMax5 : IapwsIf97.PMax;
+        double pLo = IapwsIf97.PSearchMin, pHi = pMax;
+        bool liquidSide = false;
+        if (t <= Region3.Tc)
+        {
+            double ps = t >= Region3.Tc ? Region3.Pc : Region4.SaturationPressure(t);
+            SaturatedPhases(t, ps, out var liquid, out var vapour);
+            double yl = volume ? liquid.V : liquid.S, yv = volume ? vapour.V : vapour.S;
+            if (y >= yl && y <= yv)
+            {
+                double x = yv == yl ? 0.0 : Math.Clamp((y - yl) / (yv - yl), 0.0, 1.0);
+                state = Mix(liquid, vapour, x, t, ps);
+                return Fit.Ok;
+            }
+
+            if (y < yl)
+            {
+                pLo = ps;
+                liquidSide = true;
+            }
+            else
+            {
+                pHi = ps;
+            }
+
+            if (volume && t > T13 && t < Region3.Tc)
+            {
+                double p3 = Region3.Pressure(1.0 / y, t, out _);
+                if (p3 >= Region3.PressureB23(t) && p3 <= pMax)
+                {
+                    state = Region3.Properties(1.0 / y, t).ToStatePoint(IapwsIf97.PhaseOf(3, t, p3, liquidSide));
+                    return Fit.Ok;
+                }
+            }
+        }
+        else if (volume && t <= IapwsIf97.TB23Max)
+        {
+            double p3 = Region3.Pressure(1.0 / y, t, out double slope);
+            if (slope > 0 && p3 >= Region3.PressureB23(t) && p3 <= pMax)
+            {
+                state = Region3.Properties(1.0 / y, t).ToStatePoint(IapwsIf97.PhaseOf(3, t, p3, false));
+                return Fit.Ok;
+            }
+        }
+
+        var f = new IsothermGap { T = t, Target = volume ? Math.Log(y) : y, Volume = volume, LiquidSide = liquidSide };
+        double fLo = f.Evaluate(Math.Log(pLo)), fHi = f.Evaluate(Math.Log(pHi));
+
+        // s and v both fall as p rises along an isotherm (liquid water below about 277 K aside, where s rises with p).
+        double endTol = volume ? 1e-12 : 1e-12 * Math.Max(Math.Abs(y), 1.0);
+        if (!(fLo * fHi <= 0) && Math.Min(Math.Abs(fLo), Math.Abs(fHi)) <= endTol)
+        {
+            state = SinglePhaseTP(t, Math.Abs(fLo) < Math.Abs(fHi) ? pLo : pHi, liquidSide);
+            return Fit.Ok;
+        }
+
+        if (!(fLo * fHi <= 0))
+        {
+            state = default;
+            bool belowAll = volume ? f.Target < Math.Min(Math.Log(SinglePhaseTP(t, pHi, liquidSide).V), Math.Log(SinglePhaseTP(t, pLo, liquidSide).V))
+                : y < Math.Min(SinglePhaseTP(t, pHi, liquidSide).S, SinglePhaseTP(t, pLo, liquidSide).S) * 1e-3;
+            return belowAll ? Fit.Below : Fit.Above;
+        }
+
+        if (!Brent.TrySolve(ref f, Math.Log(pLo), Math.Log(pHi), out double lnp, 1e-14))
+        {
+            throw new NonConvergenceException("IAPWS-IF97: p(T, s or v) did not converge.");
+        }
+
+        state = SinglePhaseTP(t, Math.Exp(lnp), liquidSide);
+        return Fit.Ok;
+    }
+
+    // ------------------------------------------------------------ (p, v) by iteration in T
+
+    private struct IsobarVolumeGap : IScalarFunction
+    {
+        public double P;
+        public double LnV;
+        public bool LiquidSide;
+
+        public readonly double Evaluate(double t) => Math.Log(SinglePhaseTP(t, P, LiquidSide).V) - LnV;
+    }
+
+    /// <summary>State from (p MPa, v m³/kg).</summary>
+    internal static Fit SolvePV(double p, double v, out StatePoint state)
+    {
+        double tHi = p > IapwsIf97.PMax5 ? T25 : TMax;
+        double tLo = TMin;
+        bool liquidSide = false;
+        if (p >= IapwsIf97.PSatMin && p <= Region3.Pc)
+        {
+            double ts = p >= Region3.Pc ? Region3.Tc : Region4.SaturationTemperature(p);
+            SaturatedPhases(ts, p, out var liquid, out var vapour);
+            if (v >= liquid.V && v <= vapour.V)
+            {
+                double x = vapour.V == liquid.V ? 0.0 : Math.Clamp((v - liquid.V) / (vapour.V - liquid.V), 0.0, 1.0);
+                state = Mix(liquid, vapour, x, ts, p);
+                return Fit.Ok;
+            }
+
+            if (v < liquid.V)
+            {
+                tHi = ts;
+                liquidSide = true;
+            }
+            else
+            {
+                tLo = ts;
+            }
+        }
+
+        var f = new IsobarVolumeGap { P = p, LnV = Math.Log(v), LiquidSide = liquidSide };
+        double fLo = f.Evaluate(tLo), fHi = f.Evaluate(tHi);
+        if (!(fLo * fHi <= 0) && Math.Min(Math.Abs(fLo), Math.Abs(fHi)) <= 1e-12)
+        {
+            state = SinglePhaseTP(Math.Abs(fLo) < Math.Abs(fHi) ? tLo : tHi, p, liquidSide);
+            return Fit.Ok;
+        }
+        if (!(fLo * fHi <= 0))
+        {
+            // Liquid near its density maximum (about 277 K): v(T) is not monotonic; look for the root above the maximum.
+            bool found = false;
+            if (liquidSide || tLo == TMin)
+            {
+                double prev = fLo, tPrev = tLo, tEnd = Math.Min(tHi, 320.0);
+                for (double tk = tLo + 1.0; tk <= tEnd; tk += 1.0)
+                {
+                    double fk = f.Evaluate(tk);
+                    if (prev * fk <= 0)
+                    {
+                        tLo = tPrev;
+                        tHi = tk;
+                        found = true;
+                    }
+
+                    prev = fk;
+                    tPrev = tk;
+                }
+
+                if (tPrev < tEnd && prev * f.Evaluate(tEnd) <= 0)
+                {
+                    tLo = tPrev;
+                    tHi = tEnd;
+                    found = true;
+                }
+            }
+
+            if (!found)
+            {
+                state = default;
+                return fLo > 0 && fHi > 0 ? Fit.Below : Fit.Above;
+            }
+        }
+
+        if (!Brent.TrySolve(ref f, tLo, tHi, out double t, 1e-12))
+        {
+            throw new NonConvergenceException("IAPWS-IF97: T(p, v) did not converge.");
+        }
+
+        state = SinglePhaseTP(t, p, liquidSide);
+        return Fit.Ok;
+    }
+
+    // ------------------------------------------------------------ (h, s), (v, u), (v, s): nested iteration
+
+    private struct HsGap : IScalarFunction
+    {
+        public double H;
+        public double S;
+
+        public readonly double Evaluate(double lnp)
+        {
+            double p = Math.Exp(lnp);
+            return SolvePY(p, H, false, out var st) switch
+            {
+                Fit.Ok => st.S * 1e-3 - S,
+                Fit.Below when p < IapwsIf97.PSatMin => 1e3,
+                _ => -1e3,
+            };
+        }
+    }
+
+    /// <summary>
+    /// State from (h kJ/kg, s kJ/(kg·K)): Brent in ln p on s(p, h), which falls monotonically with p (∂s/∂p at constant
+    /// h is −v/T). Seam: <paramref name="startP"/> (an SR2-01/SR4-04 p(h,s) value; NaN: none).
+    /// </summary>
+    internal static bool SolveHS(double h, double s, double startP, out StatePoint state)
+    {
+        var f = new HsGap { H = h, S = s };
+        double lo = Math.Log(IapwsIf97.PSearchMin), hi = Math.Log(IapwsIf97.PMax);
+        if (!double.IsNaN(startP) && startP > IapwsIf97.PSearchMin && startP < IapwsIf97.PMax)
+        {
+            // Narrow the bracket around the starting value when it holds a sign change.
+            double a = Math.Log(startP * 0.999), b = Math.Log(Math.Min(startP * 1.001, IapwsIf97.PMax));
+            if (f.Evaluate(a) * f.Evaluate(b) <= 0)
+            {
+                lo = a;
+                hi = b;
+            }
+        }
+
+        state = default;
+        double fHi = f.Evaluate(hi);
+        double lnp;
+        if (Math.Abs(fHi) <= 1e-12 * Math.Max(Math.Abs(s), 1.0))
+        {
+            lnp = hi;
+        }
+        else if (!Brent.TrySolve(ref f, lo, hi, out lnp, 1e-15))
+        {
+            return false;
+        }
+
+        if (SolvePY(Math.Exp(lnp), h, false, out state) != Fit.Ok)
+        {
+            return false;
+        }
+
+        return Math.Abs(state.S * 1e-3 - s) <= 1e-9 * Math.Max(Math.Abs(s), 1.0);
+    }
+
+    private struct IsochoreGap : IScalarFunction
+    {
+        public double V;
+        public double Target;
+        public bool Entropy;
+
+        public readonly double Evaluate(double t) => SolveTY(t, V, true, out var st) switch
+        {
+            Fit.Ok => (Entropy ? st.S : st.U) * 1e-3 - Target,
+            Fit.Below => 1e6, // v below what T reaches at the highest pressure: T is too high
+            _ => -1e6,
+        };
+    }
+
+    /// <summary>State from (v, u kJ/kg) or (v, s kJ/(kg·K)): Brent in T on u(T, v) or s(T, v), which rise with T.</summary>
+    internal static bool SolveVY(double v, double y, bool entropy, out StatePoint state)
+    {
+        var f = new IsochoreGap { V = v, Target = y, Entropy = entropy };
+        state = default;
+        double endTol = 1e-12 * Math.Max(Math.Abs(y), 1.0);
+        double t;
+        if (Math.Abs(f.Evaluate(TMin)) <= endTol)
+        {
+            t = TMin;
+        }
+        else if (Math.Abs(f.Evaluate(TMax)) <= endTol)
+        {
+            t = TMax;
+        }
+        else if (!Brent.TrySolve(ref f, TMin, TMax, out t, 1e-11))
+        {
+            return false;
+        }
+
+        if (SolveTY(t, v, true, out state) != Fit.Ok)
+        {
+            return false;
+        }
+
+        double got = (entropy ? state.S : state.U) * 1e-3;
+        return Math.Abs(got - y) <= 1e-8 * Math.Max(Math.Abs(y), entropy ? 0.01 : 1.0);
+    }
+}
