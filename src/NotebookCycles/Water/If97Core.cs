@@ -103,6 +103,12 @@ internal static class If97Core
             throw new NonConvergenceException(FormattableString.Invariant($"IAPWS-IF97 region 3: saturated densities not found at T = {t} K, p = {p} MPa."));
         }
 
+        if (rl < rv)
+        {
+            // Only within microkelvins of Tc, where a branch fell back to the isotherm's single root: one density for both.
+            rl = rv = Region3Density.Solve(p, t, Region3Density.Branch.Single);
+        }
+
         liquid = Region3.Properties(rl, t);
         vapour = Region3.Properties(rv, t);
     }

@@ -9,6 +9,9 @@ public sealed class IapwsIf97Tests
 {
     private static readonly IapwsIf97 Steam = IapwsIf97.Default;
 
+    // Range texts: 273.15 K, 2273.15 K, 100 MPa, 50 MPa are the validity limits of IAPWS R7-97(2012) Sec. 2; 647.096 K and
+    // 22.064 MPa its critical point (eqs. 2, 3); 0.611213 kPa is psat(273.15 K) by eq. 30; 453.036 K is Tsat(1 MPa)
+    // (R7-97(2012) Table 36: 453.035632 K); the metastable-vapour limit of 10 MPa is that of eq. 18 (Sec. 6.2).
     public static TheoryData<string, Func<IapwsIf97, StatePoint>, StateProperty, string> BadInputs() => new()
     {
         { "T is NaN", m => m.FromTP(double.NaN, 1e5), StateProperty.Temperature, "positive finite" },
@@ -143,6 +146,7 @@ public sealed class IapwsIf97Tests
             var l = Steam.FromTX(t, 0);
             var v = Steam.FromTX(t, 1);
             double gl = l.H - t * l.S, gv = v.H - t * v.S;
+            // R = 461.526 J/(kg·K): IAPWS R7-97(2012) eq. 1.
             Assert.True(Math.Abs(gl - gv) / (461.526 * t) < 1e-5, $"T = {t} K: Δg/RT = {(gl - gv) / (461.526 * t):E2}");
             Assert.True(l.V < 1.0 / 322.0 && v.V > 1.0 / 322.0);
         }
@@ -171,7 +175,7 @@ public sealed class IapwsIf97Tests
     [Fact]
     public void Metastable_vapour_is_only_given_on_request()
     {
-        // T = 450 K, p = 1 MPa lies below Tsat(1 MPa) = 453.04 K: FromTP gives the stable liquid, the separate method the metastable vapour.
+        // T = 450 K, p = 1 MPa lies below Tsat(1 MPa) = 453.04 K (R7-97(2012) Table 36): FromTP gives the stable liquid, the separate method the metastable vapour.
         Assert.Equal(Phase.Liquid, Steam.FromTP(450, 1e6).Phase);
         var meta = Steam.MetastableVapourFromTP(450, 1e6);
         Assert.Equal(Phase.Vapour, meta.Phase);
