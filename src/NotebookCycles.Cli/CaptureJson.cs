@@ -46,6 +46,18 @@ public static class CaptureJson
         return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
     }
 
+    private static void Number(Utf8JsonWriter json, string name, double value)
+    {
+        if (double.IsFinite(value))
+        {
+            json.WriteNumber(name, value);
+        }
+        else
+        {
+            json.WriteNull(name);
+        }
+    }
+
     private static void WriteValue(Utf8JsonWriter json, object value)
     {
         switch (value)
@@ -80,6 +92,21 @@ public static class CaptureJson
                 }
 
                 json.WriteEndArray();
+                json.WriteEndObject();
+                break;
+            case CombinedCycleResult combined:
+                json.WriteStartObject();
+                json.WriteString("kind", "combined");
+                Number(json, "gas_to_steam_mass_ratio", combined.GasToSteamMassRatio);
+                Number(json, "pinch_gas_T_K", combined.PinchGasTemperature);
+                Number(json, "stack_T_K", combined.StackTemperature);
+                Number(json, "net_work_J_per_kg_gas", combined.NetWork);
+                Number(json, "thermal_efficiency", combined.ThermalEfficiency);
+                Number(json, "recovered_heat_J_per_kg_gas", combined.RecoveredHeat);
+                json.WritePropertyName("gas_turbine");
+                RecordJson.WriteCycle(json, combined.GasTurbine);
+                json.WritePropertyName("steam_cycle");
+                RecordJson.WriteCycle(json, combined.SteamCycle);
                 json.WriteEndObject();
                 break;
             default:

@@ -208,7 +208,7 @@ public static class NotebookRunner
     {
         switch (value)
         {
-            case CycleResult or Properties.State or Sweeps.SweepResult or Sweeps.OptimumResult or Cycles.CycleComparison or CalculationRecord:
+            case CycleResult or Properties.State or Sweeps.SweepResult or Sweeps.OptimumResult or Cycles.CycleComparison or CalculationRecord or CombinedCycleResult:
                 values.Add(new CapturedValue(cell, value));
                 break;
             case System.Collections.IEnumerable many and not string:

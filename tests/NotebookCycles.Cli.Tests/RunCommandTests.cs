@@ -73,6 +73,29 @@ public sealed class RunCommandTests
     }
 
     [Fact]
+    public void A_displayed_combined_cycle_is_written_with_both_cycles()
+    {
+        using var dir = new Cli.TempFolder();
+        string nb = dir.File("cc.dib");
+        File.WriteAllText(nb, """
+            #!csharp
+
+            using NotebookCycles.Water;
+            var gas = GasTurbineCycles.Brayton(IdealGas.DryAir, 288.15.Kelvins(), 101.325.Kilopascals(), 15, 1450.Kelvins(), new BraytonOptions { CompressorEfficiency = 0.86, TurbineEfficiency = 0.89 });
+            var plant = CombinedCycles.GasTurbineWithSteamBottoming(gas, IapwsIf97.Default, 7.Megapascals(), 500.DegreesCelsius(), 10.Kilopascals(), TemperatureDelta.FromKelvins(10));
+            display(plant);
+            """);
+        var (exit, _, stderr) = Cli.Run("run", nb, "--json", dir.File("cc.json"));
+        Assert.True(exit == 0, stderr);
+        using var json = JsonDocument.Parse(File.ReadAllText(dir.File("cc.json")));
+        var value = json.RootElement.GetProperty("values")[0].GetProperty("value");
+        Assert.Equal("combined", value.GetProperty("kind").GetString());
+        Assert.True(value.GetProperty("gas_to_steam_mass_ratio").GetDouble() > 1);
+        Assert.Equal("cycle", value.GetProperty("gas_turbine").GetProperty("kind").GetString());
+        Assert.Equal("cycle", value.GetProperty("steam_cycle").GetProperty("kind").GetString());
+    }
+
+    [Fact]
     public void A_failing_cell_gives_exit_1_with_the_cell_number_and_error_and_leaves_the_old_memo_alone()
     {
         using var dir = new Cli.TempFolder();
