@@ -201,7 +201,7 @@ internal static class ChainSolver
 
             sgenTotal += m * step.EntropyGenerated;
             double scale = Math.Max(Math.Max(Math.Abs(step.DeltaS), step.Q == 0 ? 0 : Math.Abs(step.Q / step.BoundaryTemperature)), 1.0);
-            double tolerance = 1e-9 * scale;
+            double tolerance = Math.Max(1e-9, c.Model.ConsistencyTolerance) * scale;
             if (step.EntropyGenerated < -tolerance)
             {
                 c.CurrentStepDescription = $"step {step.Index}, {step.Process.ToLowerInvariant()} {step.Name}";
