@@ -61,6 +61,7 @@ public static class NotebookCyclesExtension
         Formatter.Register<CalculationRecord>((r, w) => w.Write(CycleText.Record(r, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
         Formatter.Register<CycleComparison>((c, w) => w.Write(CycleHtml.Comparison(c, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
         Formatter.Register<CycleComparison>((c, w) => w.Write(CycleText.Comparison(c, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
+        SweepFormatters.Register();
     }
 
     /// <summary>The line shown after loading.</summary>
