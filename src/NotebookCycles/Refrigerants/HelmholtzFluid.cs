@@ -47,7 +47,7 @@ internal sealed class HelmholtzFluid
         _lnP = new Spline(lnP, _du);
         _lnDeltaL = new Spline(lnL, _du);
         _lnDeltaV = new Spline(lnV, _du);
-        TriplePressure = Math.Exp(lnP[Nodes - 1]);
+        TriplePressure = TrySaturationAtTemperature(Tt, out var triple) ? triple.P : Math.Exp(lnP[Nodes - 1]);
     }
 
     public RefrigerantData Data { get; }
@@ -129,6 +129,48 @@ internal sealed class HelmholtzFluid
         return TrySaturationAtTemperature(t, rl / _rhor, rv / _rhor, out sat, out _, out _);
     }
 
+    /// <summary>
+    /// Close to Tc: continuation along the saturation line from a temperature twice as far from Tc (where Newton
+    /// converges), halving the distance each step and scaling the density differences by 2^(−0.35) (the critical
+    /// exponent β ≈ 0.35) for the next start.
+    /// </summary>
+    public bool TrySaturationNearCritical(double t, out SaturationPoint sat)
+    {
+        double d = Tc - t;
+        double dc = RhoC / _rhor;
+        int k = 1;
+        SaturationPoint s = default;
+        for (; k < 30; k++)
+        {
+            if (Tc - d * Math.Pow(2, k) > Tt && TrySaturationAtTemperature(Tc - d * Math.Pow(2, k), out s))
+            {
+                break;
+            }
+        }
+
+        if (k == 30)
+        {
+            sat = default;
+            return false;
+        }
+
+        double factor = Math.Pow(2, -0.35);
+        for (int j = k - 1; j >= 0; j--)
+        {
+            double tj = Tc - d * Math.Pow(2, j);
+            double gl = dc + (s.RhoLiquid / _rhor - dc) * factor;
+            double gv = dc + (s.RhoVapour / _rhor - dc) * factor;
+            if (!TrySaturationAtTemperature(tj, gl, gv, out s, out _, out _))
+            {
+                sat = default;
+                return false;
+            }
+        }
+
+        sat = s;
+        return true;
+    }
+
     private bool TrySaturationAtTemperature(double t, double dl, double dv, out SaturationPoint sat, out ResidualParts rlOut, out ResidualParts rvOut)
     {
         double tau = _tr / t;
@@ -166,6 +208,13 @@ internal sealed class HelmholtzFluid
             }
 
             if (it > 3 && Math.Abs(stepL) <= 1e-12 * dl && Math.Abs(stepV) <= 1e-12 * dv && Math.Abs(f2) < 1e-13 * Math.Max(1, Math.Abs(kv)))
+            {
+                converged = true;
+                break;
+            }
+
+            // Next to Tc the differences J″ − J′ and K″ − K′ are limited by rounding: accept a step of 1e-10 there.
+            if (it > 6 && t > 0.995 * Tc && Math.Abs(stepL) <= 1e-10 * dl && Math.Abs(stepV) <= 1e-10 * dv)
             {
                 converged = true;
                 break;

@@ -82,7 +82,7 @@ public sealed class Refrigerant : ISaturationModel
         _tRange = new ValidityRange(StateProperty.Temperature, fluid.Tt, fluid.Data.MaximumTemperature);
         _pRange = new ValidityRange(StateProperty.Pressure, MinimumPressure, fluid.Data.MaximumPressure);
         _tSatRange = new ValidityRange(StateProperty.Temperature, fluid.Tt, fluid.Tc);
-        _pSatRange = new ValidityRange(StateProperty.Pressure, fluid.TriplePressure, fluid.Pc);
+        _pSatRange = new ValidityRange(StateProperty.Pressure, fluid.TriplePressure * (1 - 1e-12), fluid.Pc);
     }
 
     /// <summary>The names <see cref="Get"/> accepts.</summary>
@@ -412,7 +412,7 @@ public sealed class Refrigerant : ISaturationModel
             return new SaturationPoint(_f.Tc, _f.Pc, _f.RhoC, _f.RhoC);
         }
 
-        if (_f.TrySaturationAtTemperature(t, out var s))
+        if (_f.TrySaturationAtTemperature(t, out var s) || _f.TrySaturationNearCritical(t, out s))
         {
             return s;
         }
