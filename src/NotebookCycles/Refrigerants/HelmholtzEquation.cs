@@ -1,4 +1,3 @@
-using System.Runtime.CompilerServices;
 
 namespace NotebookCycles.Refrigerants;
 
@@ -62,6 +61,10 @@ internal sealed class HelmholtzEquation
     private readonly double[] _beta;
     private readonly double[] _gamma;
     private readonly double[] _b;
+    private readonly int[] _di;
+    private readonly int[] _tIndex;
+    private readonly double[] _uniqueT;
+    private readonly int _powMax;
 
     // Non-analytic terms.
     private readonly double[] _naN;
@@ -109,6 +112,30 @@ internal sealed class HelmholtzEquation
             _gamma[i] = r.Gamma;
             _b[i] = r.B;
         }
+
+        _di = new int[count];
+        _tIndex = new int[count];
+        var unique = new List<double>();
+        for (int i = 0; i < count; i++)
+        {
+            if (_d[i] != Math.Round(_d[i]) || _d[i] < 0)
+            {
+                throw new InvalidOperationException($"Residual term {i + 1}: the density exponent d = {_d[i]} must be a non-negative integer.");
+            }
+
+            _di[i] = (int)_d[i];
+            int k = unique.IndexOf(_t[i]);
+            if (k < 0)
+            {
+                k = unique.Count;
+                unique.Add(_t[i]);
+            }
+
+            _tIndex[i] = k;
+            _powMax = Math.Max(_powMax, Math.Max(_di[i], _l[i]));
+        }
+
+        _uniqueT = [.. unique];
 
         int na = terms.NonAnalytic.Count;
         _naN = new double[na];
@@ -174,25 +201,55 @@ internal sealed class HelmholtzEquation
         return new IdealParts { A = a, T = at, TT = att };
     }
 
-    /// <summary>The residual part and its scaled derivatives at (δ, τ).</summary>
+    /// <summary>
+    /// The residual part and its scaled derivatives at (δ, τ). The powers δ^d (integer d) come from one table of
+    /// products, τ^t from one exponential per distinct t, e^(−δ^l) from one exponential per distinct l; only the
+    /// Gaussian, associating and non-analytic terms take an exponential each.
+    /// </summary>
     public ResidualParts Residual(double delta, double tau)
     {
-        double lnDelta = Math.Log(delta);
         double lnTau = Math.Log(tau);
+        double[] uniqueT = _uniqueT;
+        Span<double> tauPow = stackalloc double[uniqueT.Length];
+        for (int k = 0; k < uniqueT.Length; k++)
+        {
+            double tk = uniqueT[k];
+            tauPow[k] = tk == 0 ? 1 : tk == 1 ? tau : Math.Exp(tk * lnTau);
+        }
+
+        int powMax = _powMax;
+        Span<double> deltaPow = stackalloc double[powMax + 1];
+        Span<double> expL = stackalloc double[powMax + 1];
+        deltaPow[0] = 1;
+        for (int k = 1; k <= powMax; k++)
+        {
+            deltaPow[k] = deltaPow[k - 1] * delta;
+            expL[k] = double.NaN;
+        }
+
         double a = 0, ad = 0, add = 0, at = 0, att = 0, adt = 0;
-        double[] n = _n, d = _d, t = _t;
-        int[] kind = _kind;
+        double[] n = _n, t = _t;
+        int[] kind = _kind, di = _di, tIndex = _tIndex, ls = _l;
         for (int i = 0; i < n.Length; i++)
         {
-            double di = d[i], ti = t[i];
-            double f = 0, df = 0, ddf = 0, g = 0, dg = 0, ddg = 0; // δ·F', δ²·F'', τ·G', τ²·G''
+            int dInt = di[i];
+            double dd = dInt, ti = t[i];
+            double v = n[i] * deltaPow[dInt] * tauPow[tIndex[i]];
+            double df = 0, ddf = 0, dg = 0, ddg = 0; // δ·F', δ²·F'', τ·G', τ²·G''
             switch (kind[i])
             {
                 case 1:
                     {
-                        int l = _l[i];
-                        double dl = IntPow(delta, l);
-                        f = -dl;
+                        int l = ls[i];
+                        double dl = deltaPow[l];
+                        double e = expL[l];
+                        if (double.IsNaN(e))
+                        {
+                            e = Math.Exp(-dl);
+                            expL[l] = e;
+                        }
+
+                        v *= e;
                         df = -l * dl;
                         ddf = -l * (l - 1) * dl;
                         break;
@@ -203,11 +260,12 @@ internal sealed class HelmholtzEquation
                     {
                         double x = delta - _eps[i];
                         double eta = _eta[i];
-                        f = -eta * x * x;
+                        double f = -eta * x * x;
                         df = -2 * eta * x * delta;
                         ddf = -2 * eta * delta * delta;
                         double y = tau - _gamma[i];
                         double beta = _beta[i];
+                        double g;
                         if (kind[i] == 2)
                         {
                             g = -beta * y * y;
@@ -223,16 +281,16 @@ internal sealed class HelmholtzEquation
                             ddg = (-2 * beta / q2 + 8 * beta * beta * y * y / (q2 * q)) * tau * tau;
                         }
 
+                        v *= Math.Exp(f + g);
                         break;
                     }
             }
 
-            double v = n[i] * Math.Exp(di * lnDelta + ti * lnTau + f + g);
-            double pd = di + df; // δ·D'/D
+            double pd = dd + df; // δ·D'/D
             double pt = ti + dg; // τ·T'/T
             a += v;
             ad += v * pd;
-            add += v * (pd * pd - di + ddf);
+            add += v * (pd * pd - dd + ddf);
             at += v * pt;
             att += v * (pt * pt - ti + ddg);
             adt += v * pd * pt;
@@ -245,26 +303,6 @@ internal sealed class HelmholtzEquation
 
         return new ResidualParts { A = a, D = ad, DD = add, T = at, TT = att, DT = adt };
     }
-
-    /// <summary>
-    /// δ·αʳ_δ and δ²·αʳ_δδ only (the pressure and its density derivative): the inner loop of the density solver.
-    /// </summary>
-    public void ResidualDelta(double delta, double tau, out double ad, out double add)
-    {
-        var r = Residual(delta, tau);
-        ad = r.D;
-        add = r.DD;
-    }
-
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static double IntPow(double x, int n) => n switch
-    {
-        1 => x,
-        2 => x * x,
-        3 => x * x * x,
-        4 => (x * x) * (x * x),
-        _ => Math.Pow(x, n),
-    };
 
     private void AddNonAnalytic(double delta, double tau, ref double a, ref double ad, ref double add, ref double at, ref double att, ref double adt)
     {

@@ -339,15 +339,22 @@ internal sealed class HelmholtzFluid
             }
 
             double next = x - f / dpdx;
-            if (!(dpdx > 0) || !(next > xlo && next < xhi))
+            if (dpdx > 0 && Math.Abs(next - x) < 1e-11)
+            {
+                // Quadratic convergence: the error after this step is of the order of its square.
+                rho = Math.Exp(Math.Clamp(next, xlo, xhi));
+                return true;
+            }
+
+            if (!(dpdx > 0 && next > xlo && next < xhi))
             {
                 next = 0.5 * (xlo + xhi);
             }
 
-            if (Math.Abs(f) <= 1e-15 * p || Math.Abs(next - x) < 4e-16 || xhi - xlo < 4e-16)
+            if (xhi - xlo <= 2e-15 * Math.Max(1, Math.Abs(x)) || next == x)
             {
                 rho = Math.Exp(next);
-                return Math.Abs(f) <= 1e-9 * p || (sawLow && sawHigh && xhi - xlo < 1e-12);
+                return Math.Abs(f) <= 1e-9 * p || (sawLow && sawHigh);
             }
 
             x = next;
