@@ -25,6 +25,7 @@ internal sealed class HelmholtzFluid
     private readonly Spline _lnP;
     private readonly Spline _lnDeltaL;
     private readonly Spline _lnDeltaV;
+    private readonly Spline _stiffnessL;
 
     public HelmholtzFluid(RefrigerantData data)
     {
@@ -43,10 +44,12 @@ internal sealed class HelmholtzFluid
         var lnP = new double[Nodes];
         var lnL = new double[Nodes];
         var lnV = new double[Nodes];
-        BuildTable(lnP, lnL, lnV);
+        var kL = new double[Nodes];
+        BuildTable(lnP, lnL, lnV, kL);
         _lnP = new Spline(lnP, _du);
         _lnDeltaL = new Spline(lnL, _du);
         _lnDeltaV = new Spline(lnV, _du);
+        _stiffnessL = new Spline(kL, _du);
         TriplePressure = TrySaturationAtTemperature(Tt, out var triple) ? triple.P : Math.Exp(lnP[Nodes - 1]);
     }
 
@@ -116,6 +119,21 @@ internal sealed class HelmholtzFluid
         rhoV = Math.Exp(_lnDeltaV.At(u)) * _rhor;
     }
 
+    /// <summary>A starting density at (T, p) on a branch below Tc: the liquid by the saturated liquid's (∂p/∂ρ)_T, the vapour by Z linear in p.</summary>
+    public double GuessDensity(double t, double p, bool liquid, double pSat, double rhoL, double rhoV)
+    {
+        if (liquid)
+        {
+            double u = Math.Cbrt(Math.Max(0, 1 - t / Tc));
+            double dpdrho = R * t * _stiffnessL.At(u);
+            return dpdrho > 0 ? rhoL + (p - pSat) / dpdrho : rhoL;
+        }
+
+        double zSat = pSat / (rhoV * R * t);
+        double z = 1 + (zSat - 1) * p / pSat;
+        return Math.Min(p / (z * R * t), rhoV);
+    }
+
     /// <summary>Saturation temperature estimate at pressure p from the table.</summary>
     public double EstimateTemperature(double p) => Tc * (1 - Math.Pow(_lnP.InverseDecreasing(Math.Log(p)), 3));
 
@@ -176,6 +194,7 @@ internal sealed class HelmholtzFluid
         double tau = _tr / t;
         ResidualParts rl = default, rv = default;
         bool converged = false;
+        double pSat = double.NaN;
         for (int it = 0; it < 60; it++)
         {
             rl = _eq.Residual(dl, tau);
@@ -199,26 +218,19 @@ internal sealed class HelmholtzFluid
                 lambda *= 0.5;
             }
 
+            if (lambda == 1 && Math.Abs(stepL) <= 1e-10 * dl && Math.Abs(stepV) <= 1e-10 * dv)
+            {
+                // Quadratic convergence: after this step the error is of the order of its square. The pressure
+                // follows to first order from the last evaluation.
+                pSat = _rhor * R * t * (dv * (1 + rv.D) + (1 + 2 * rv.D + rv.DD) * stepV);
+                dl += stepL;
+                dv += stepV;
+                converged = true;
+                break;
+            }
+
             dl += lambda * stepL;
             dv += lambda * stepV;
-            if (Math.Abs(stepL) <= 1e-14 * dl && Math.Abs(stepV) <= 1e-14 * dv)
-            {
-                converged = true;
-                break;
-            }
-
-            if (it > 3 && Math.Abs(stepL) <= 1e-12 * dl && Math.Abs(stepV) <= 1e-12 * dv && Math.Abs(f2) < 1e-13 * Math.Max(1, Math.Abs(kv)))
-            {
-                converged = true;
-                break;
-            }
-
-            // Next to Tc the differences J″ − J′ and K″ − K′ are limited by rounding: accept a step of 1e-10 there.
-            if (it > 6 && t > 0.995 * Tc && Math.Abs(stepL) <= 1e-10 * dl && Math.Abs(stepV) <= 1e-10 * dv)
-            {
-                converged = true;
-                break;
-            }
         }
 
         rlOut = rl;
@@ -229,20 +241,72 @@ internal sealed class HelmholtzFluid
             return false;
         }
 
-        rv = _eq.Residual(dv, tau);
-        rl = _eq.Residual(dl, tau);
-        rlOut = rl;
-        rvOut = rv;
-        double p = dv * _rhor * R * t * (1 + rv.D);
-        sat = new SaturationPoint(t, p, dl * _rhor, dv * _rhor);
+        sat = new SaturationPoint(t, pSat, dl * _rhor, dv * _rhor);
         return true;
     }
 
     /// <summary>
-    /// Saturation at pressure p (Newton on T with the Clausius-Clapeyron slope d ln p/dT = Δs/(p·Δv), each step a
-    /// phase-equilibrium solve at T warm-started from the last). p_triple ≤ p &lt; pc.
+    /// Saturation at pressure p, p_triple ≤ p &lt; pc: Newton on (T, δ′, δ″) together; next to pc, and should that
+    /// fail, Newton on T with the Clausius-Clapeyron slope d ln p/dT = Δs/(p·Δv), each step a phase-equilibrium solve
+    /// at T warm-started from the last.
     /// </summary>
-    public bool TrySaturationAtPressure(double p, out SaturationPoint sat)
+    public bool TrySaturationAtPressure(double p, out SaturationPoint sat) =>
+        (p < 0.995 * Pc && TrySaturationAtPressureDirect(p, out sat)) || TrySaturationAtPressureNested(p, out sat);
+
+    /// <summary>
+    /// Saturation at p by Newton on (T, δ′, δ″) together: p(T, δ′) = p, p(T, δ″) = p and equal Gibbs energy,
+    /// started from the table.
+    /// </summary>
+    private bool TrySaturationAtPressureDirect(double p, out SaturationPoint sat)
+    {
+        double t = EstimateTemperature(p);
+        Estimate(t, out _, out double rl0, out double rv0);
+        double dl = rl0 / _rhor, dv = rv0 / _rhor;
+        for (int it = 0; it < 30; it++)
+        {
+            double tau = _tr / t;
+            var rl = _eq.Residual(dl, tau);
+            var rv = _eq.Residual(dv, tau);
+            double rt = R * t, scale = _rhor / p;
+            double f1 = dl * scale * rt * (1 + rl.D) - 1;
+            double f2 = dv * scale * rt * (1 + rv.D) - 1;
+            double f3 = Math.Log(dl / dv) + rl.A - rv.A + rl.D - rv.D;
+            double kl = 1 + 2 * rl.D + rl.DD, kv = 1 + 2 * rv.D + rv.DD;
+            double a1 = dl * scale * R * (1 + rl.D - rl.DT), b1 = scale * rt * kl;
+            double a2 = dv * scale * R * (1 + rv.D - rv.DT), b2 = scale * rt * kv;
+            double a3 = -(rl.T + rl.DT - rv.T - rv.DT) / t, c3 = kl / dl, e3 = -kv / dv;
+            double den = a3 - c3 * a1 / b1 - e3 * a2 / b2;
+            double dt = -(f3 - c3 * f1 / b1 - e3 * f2 / b2) / den;
+            double ddl = -(f1 + a1 * dt) / b1;
+            double ddv = -(f2 + a2 * dt) / b2;
+            if (!double.IsFinite(dt) || !double.IsFinite(ddl) || !double.IsFinite(ddv))
+            {
+                break;
+            }
+
+            if (Math.Abs(dt) <= 1e-10 * t && Math.Abs(ddl) <= 1e-10 * dl && Math.Abs(ddv) <= 1e-10 * dv)
+            {
+                t += dt;
+                sat = new SaturationPoint(t, p, (dl + ddl) * _rhor, (dv + ddv) * _rhor);
+                return t >= Tt * (1 - 1e-9) && t < Tc && dl > dv;
+            }
+
+            double lambda = 1;
+            while ((dv + lambda * ddv <= 0 || dl + lambda * ddl <= dv + lambda * ddv || t + lambda * dt >= Tc) && lambda > 1e-4)
+            {
+                lambda *= 0.5;
+            }
+
+            t += lambda * dt;
+            dl += lambda * ddl;
+            dv += lambda * ddv;
+        }
+
+        sat = default;
+        return false;
+    }
+
+    private bool TrySaturationAtPressureNested(double p, out SaturationPoint sat)
     {
         double t = EstimateTemperature(p);
         t = Math.Min(Math.Max(t, Tt), Tc * (1 - 1e-12));
@@ -364,7 +428,7 @@ internal sealed class HelmholtzFluid
         return false;
     }
 
-    private void BuildTable(double[] lnP, double[] lnL, double[] lnV)
+    private void BuildTable(double[] lnP, double[] lnL, double[] lnV, double[] kL)
     {
         double lnDc = Math.Log(RhoC / _rhor);
         lnP[0] = Math.Log(Pc);
@@ -419,6 +483,7 @@ internal sealed class HelmholtzFluid
                     lnP[k] = lnP[i - 1] + w * (lnP[j] - lnP[i - 1]);
                     lnL[k] = lnL[i - 1] + w * (lnL[j] - lnL[i - 1]);
                     lnV[k] = lnV[i - 1] + w * (lnV[j] - lnV[i - 1]);
+                    kL[k] = kL[i - 1] + w * (kL[j] - kL[i - 1]);
                 }
 
                 i = j;
@@ -430,6 +495,8 @@ internal sealed class HelmholtzFluid
             lnP[i] = Math.Log(s.P);
             lnL[i] = Math.Log(s.RhoLiquid / _rhor);
             lnV[i] = Math.Log(s.RhoVapour / _rhor);
+            var r = _eq.Residual(s.RhoLiquid / _rhor, _tr / s.T);
+            kL[i] = 1 + 2 * r.D + r.DD;
             ok[i] = true;
         }
 
