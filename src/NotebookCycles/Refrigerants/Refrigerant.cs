@@ -373,6 +373,11 @@ public sealed class Refrigerant : ISaturationModel
     {
         var l = _f.Evaluate(s.T, s.RhoLiquid);
         var v = _f.Evaluate(s.T, s.RhoVapour);
+        return Mix(s, x, l, v);
+    }
+
+    private StatePoint Mix(in SaturationPoint s, double x, in RawState l, in RawState v)
+    {
         double vol = 1 / s.RhoLiquid + x * (1 / s.RhoVapour - 1 / s.RhoLiquid);
         double h = l.H + x * (v.H - l.H);
         double sEnt = l.S + x * (v.S - l.S);
@@ -506,12 +511,12 @@ public sealed class Refrigerant : ISaturationModel
         double lo, hi, rho;
         if (sat is null && !near)
         {
-            f.Estimate(t, out _, out double rl, out double rv);
+            f.Estimate(t, out double pe, out double rl, out double rv);
             if (branch == Branch.Liquid)
             {
                 lo = rl * (1 - 2e-3);
                 hi = f.RhoMax;
-                if (f.TryDensity(t, p, lo, hi, guess > 0 ? guess : rl, out rho) && rho >= lo * (1 + 1e-12))
+                if (f.TryDensity(t, p, lo, hi, guess > 0 ? guess : f.GuessDensity(t, p, true, pe, rl, rv), out rho) && rho >= lo * (1 + 1e-12))
                 {
                     return rho;
                 }
@@ -520,7 +525,7 @@ public sealed class Refrigerant : ISaturationModel
             {
                 lo = 0;
                 hi = rv * (1 + 2e-3);
-                if (f.TryDensity(t, p, lo, hi, guess > 0 ? guess : Math.Min(p / (f.R * t), 0.9 * hi), out rho) && rho <= hi * (1 - 1e-12))
+                if (f.TryDensity(t, p, lo, hi, guess > 0 ? guess : f.GuessDensity(t, p, false, pe, rl, rv), out rho) && rho <= hi * (1 - 1e-12))
                 {
                     return rho;
                 }
@@ -584,7 +589,7 @@ public sealed class Refrigerant : ISaturationModel
             double yl = Pick(l, property), yv = Pick(v, property);
             if (raw >= yl && raw <= yv)
             {
-                return Mix(s, (raw - yl) / (yv - yl));
+                return Mix(s, (raw - yl) / (yv - yl), l, v);
             }
 
             if (raw < yl)
@@ -604,20 +609,112 @@ public sealed class Refrigerant : ISaturationModel
         }
 
         var fn = new IsobarFunction(this, p, property, raw, branch);
-        double yLo = fn.Evaluate(tLo, out _);
-        double yHi = fn.Evaluate(tHi, out _);
-        if (!(yLo <= 0 && yHi >= 0))
+        double fLo = double.NaN, fHi = double.NaN, t;
+        if (sat is { } ss)
         {
-            double lowEnd = yLo + raw, highEnd = yHi + raw;
-            var range = new ValidityRange(property, Cooked(property, lowEnd), Cooked(property, highEnd));
-            Check.ThrowOutOfRange(Name, range, value, StateProperty.Pressure, p, property, value,
-                $"at this pressure the {(branch == Branch.Liquid ? "liquid" : branch == Branch.Vapour ? "vapour" : "fluid")} spans T = {Units.SiText.Format(StateProperty.Temperature, tLo)} to {Units.SiText.Format(StateProperty.Temperature, tHi)}");
+            // The saturation end of the bracket is known already; Newton starts from it with its own slope.
+            var end = f.Evaluate(ss.T, branch == Branch.Liquid ? ss.RhoLiquid : ss.RhoVapour);
+            double fEnd = Pick(end, property) - raw;
+            double slope = IsobarFunction.Slope(end, property, p);
+            fn.Seed(ss.T, end.Rho);
+            if (branch == Branch.Liquid)
+            {
+                fHi = fEnd;
+            }
+            else
+            {
+                fLo = fEnd;
+            }
+
+            t = ss.T - fEnd / slope;
+            if (!(t > tLo && t < tHi))
+            {
+                t = branch == Branch.Liquid ? Math.Max(0.5 * (tLo + tHi), ss.T - 5) : Math.Min(0.5 * (tLo + tHi), ss.T + 5);
+            }
+        }
+        else
+        {
+            fLo = fn.Evaluate(tLo, out _);
+            fHi = fn.Evaluate(tHi, out _);
+            if (!(fLo <= 0 && fHi >= 0))
+            {
+                RefuseIsobar(p, property, value, raw, branch, tLo, tHi, fLo, fHi);
+            }
+
+            t = 0.5 * (tLo + tHi);
         }
 
-        double guess = sat is { } ss ? (branch == Branch.Liquid ? ss.T - 1 : ss.T + 1) : 0.5 * (tLo + tHi);
-        double t = NewtonBisection.Solve(ref fn, tLo, tHi, guess, $"T at p = {p} Pa, {property} = {value}", 1e-13);
+        double lo = tLo, hi = tHi;
+        bool converged = false;
+        for (int it = 0; it < 200; it++)
+        {
+            double fx = fn.Evaluate(t, out double d);
+            if (fx < 0)
+            {
+                lo = t;
+            }
+            else
+            {
+                hi = t;
+            }
+
+            double next = t - fx / d;
+            if (d > 0 && Math.Abs(next - t) < 1e-11 * t && next >= lo && next <= hi)
+            {
+                t = next;
+                converged = true;
+                break;
+            }
+
+            if (!(d > 0 && next > lo && next < hi))
+            {
+                // Leaving the bracket: confirm the far end's sign once (out of range otherwise), then bisect.
+                if (double.IsNaN(fLo) && lo == tLo)
+                {
+                    fLo = fn.Evaluate(tLo, out _);
+                    if (fLo > 0)
+                    {
+                        RefuseIsobar(p, property, value, raw, branch, tLo, tHi, fLo, fx);
+                    }
+                }
+
+                if (double.IsNaN(fHi) && hi == tHi)
+                {
+                    fHi = fn.Evaluate(tHi, out _);
+                    if (fHi < 0)
+                    {
+                        RefuseIsobar(p, property, value, raw, branch, tLo, tHi, fx, fHi);
+                    }
+                }
+
+                next = 0.5 * (lo + hi);
+            }
+
+            if (hi - lo <= 1e-14 * hi)
+            {
+                t = next;
+                converged = true;
+                break;
+            }
+
+            t = next;
+        }
+
+        if (!converged)
+        {
+            throw new NonConvergenceException($"{Name}: T at p = {p} Pa, {property.Symbol()} = {value} did not converge.");
+        }
+
         fn.Evaluate(t, out _);
         return Single(t, fn.LastRho);
+    }
+
+    [System.Diagnostics.CodeAnalysis.DoesNotReturn]
+    private void RefuseIsobar(double p, StateProperty property, double value, double raw, Branch branch, double tLo, double tHi, double fLo, double fHi)
+    {
+        var range = new ValidityRange(property, Cooked(property, Math.Min(fLo, fHi) + raw), Cooked(property, Math.Max(fLo, fHi) + raw));
+        Check.ThrowOutOfRange(Name, range, value, StateProperty.Pressure, p, property, value,
+            $"at this pressure the {(branch == Branch.Liquid ? "liquid" : branch == Branch.Vapour ? "vapour" : "fluid")} spans T = {Units.SiText.Format(StateProperty.Temperature, tLo)} to {Units.SiText.Format(StateProperty.Temperature, tHi)}");
     }
 
     private double Cooked(StateProperty property, double raw) => property switch
@@ -630,20 +727,32 @@ public sealed class Refrigerant : ISaturationModel
     private struct IsobarFunction(Refrigerant owner, double p, StateProperty property, double target, Branch branch) : IDifferentiableFunction
     {
         public double LastRho;
+        private double _lastT;
+
+        public static double Slope(in RawState r, StateProperty property, double p) => property switch
+        {
+            StateProperty.Enthalpy => r.Cp,
+            StateProperty.Entropy => r.Cp / r.T,
+            StateProperty.SpecificVolume => r.DvDT,
+            _ => r.Cp - p * r.DvDT,
+        };
+
+        public void Seed(double t, double rho)
+        {
+            _lastT = t;
+            LastRho = rho;
+        }
 
         public double Evaluate(double t, out double derivative)
         {
             var b = t >= owner._f.Tc ? Branch.Single : (branch == Branch.Single ? Branch.Liquid : branch);
-            double rho = owner.DensityAt(t, p, b, 0);
+            // Warm start: the last density, scaled like an ideal gas on the vapour side.
+            double guess = LastRho > 0 ? (b == Branch.Liquid ? LastRho : LastRho * _lastT / t) : 0;
+            double rho = owner.DensityAt(t, p, b, guess);
             LastRho = rho;
+            _lastT = t;
             var r = owner._f.Evaluate(t, rho);
-            derivative = property switch
-            {
-                StateProperty.Enthalpy => r.Cp,
-                StateProperty.Entropy => r.Cp / t,
-                StateProperty.SpecificVolume => r.DvDT,
-                _ => r.Cp - p * r.DvDT,
-            };
+            derivative = Slope(r, property, p);
             return Pick(r, property) - target;
         }
     }
@@ -663,7 +772,7 @@ public sealed class Refrigerant : ISaturationModel
             double yl = Pick(l, property), yv = Pick(v, property);
             if (raw >= Math.Min(yl, yv) && raw <= Math.Max(yl, yv))
             {
-                return Mix(s, (raw - yl) / (yv - yl));
+                return Mix(s, (raw - yl) / (yv - yl), l, v);
             }
 
             // Entropy and enthalpy of the vapour exceed those of the liquid: the vapour side is the low-density branch.
