@@ -66,10 +66,75 @@ public static class RefrigerationCycles
         chain = sc > 0 ? chain.Condense("3", toTemperature: Temperature.FromKelvins(tc - sc)) : chain.Condense("3", toQuality: 0);
         return chain.Throttle("4", toPressure: pe).Heat(backTo: "1");
     }
+
+    /// <summary>
+    /// As <see cref="VapourCompression(ISaturationModel, Temperature, Temperature, VapourCompressionOptions?, string, CycleOptions?)"/>,
+    /// with the evaporator and condenser given by their pressures (the saturation temperatures follow from the model).
+    /// </summary>
+    public static CycleResult VapourCompression(ISaturationModel refrigerant, Pressure evaporatorPressure, Pressure condenserPressure, VapourCompressionOptions? design = null, string title = "Vapour-compression cycle", CycleOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(refrigerant);
+        double pe = evaporatorPressure.Pascals, pc = condenserPressure.Pascals;
+        if (!(pe < pc))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the evaporator pressure {Units.SiText.Pressure(pe)} must be below the condenser pressure {Units.SiText.Pressure(pc)}.");
+        }
+
+        if (!(pc < refrigerant.CriticalPoint.P))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the condenser pressure {Units.SiText.Pressure(pc)} is not below the critical pressure of {refrigerant.Name} ({Units.SiText.Pressure(refrigerant.CriticalPoint.P)}): there is no condensation; a transcritical cycle with a gas cooler is needed.");
+        }
+
+        return VapourCompression(refrigerant, Temperature.FromKelvins(refrigerant.SaturationTemperature(pe)), Temperature.FromKelvins(refrigerant.SaturationTemperature(pc)), design, title, options);
+    }
+
+    /// <summary>
+    /// Transcritical vapour compression (typically CO₂): 1 = evaporator outlet (saturated vapour plus the superheat
+    /// of <paramref name="design"/>) → compressor to the high-side pressure → 2 → gas cooler at that pressure to the
+    /// outlet temperature → 3 → expansion valve → 4 → evaporator back to 1. The high-side pressure must exceed the
+    /// critical pressure, and the gas-cooler outlet temperature must not be below the critical temperature (below it
+    /// the fluid condenses: use <see cref="VapourCompression(ISaturationModel, Temperature, Temperature, VapourCompressionOptions?, string, CycleOptions?)"/>).
+    /// The subcooling of <paramref name="design"/> does not apply.
+    /// </summary>
+    public static CycleResult Transcritical(ISaturationModel refrigerant, Temperature evaporating, Temperature gasCoolerOutlet, Pressure highSidePressure, VapourCompressionOptions? design = null, string title = "Transcritical vapour-compression cycle", CycleOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(refrigerant);
+        design ??= new VapourCompressionOptions();
+        var critical = refrigerant.CriticalPoint;
+        double te = evaporating.Kelvins, tout = gasCoolerOutlet.Kelvins, ph = highSidePressure.Pascals;
+        if (!(ph > critical.P))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the high-side pressure {Units.SiText.Pressure(ph)} is not above the critical pressure of {refrigerant.Name} ({Units.SiText.Pressure(critical.P)}): the cycle is subcritical; use a condenser.");
+        }
+
+        if (!(tout >= critical.T))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the critical temperature of {refrigerant.Name} ({Units.SiText.Format(StateProperty.Temperature, critical.T)}) is above the gas-cooler outlet temperature {Units.SiText.Format(StateProperty.Temperature, tout)}: the fluid condenses there, so a transcritical cycle is refused; use a subcritical cycle with a condenser.");
+        }
+
+        if (!(te >= refrigerant.SaturationTemperatureMinimum && te < critical.T))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the evaporating temperature {Units.SiText.Format(StateProperty.Temperature, te)} must lie between the lowest saturation temperature ({Units.SiText.Format(StateProperty.Temperature, refrigerant.SaturationTemperatureMinimum)}) and the critical temperature ({Units.SiText.Format(StateProperty.Temperature, critical.T)}).");
+        }
+
+        double sh = design.Superheat.Kelvins;
+        if (!(sh >= 0) || !double.IsFinite(sh))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the superheat ({Units.SiText.Number(sh)} K) must be finite and not negative.");
+        }
+
+        var pe = Pressure.FromPascals(refrigerant.SaturationPressure(te));
+        var chain = Cycle.SteadyFlow(title, refrigerant, options);
+        chain = sh > 0 ? chain.Start("1", T: Temperature.FromKelvins(te + sh), p: pe) : chain.Start("1", p: pe, x: 1);
+        return chain.Compress("2", toPressure: highSidePressure, efficiency: design.CompressorEfficiency)
+            .Cool("3", toTemperature: gasCoolerOutlet)
+            .Throttle("4", toPressure: pe)
+            .Heat(backTo: "1");
+    }
 }
 
 /// <summary>
-/// Figures of a single-stage vapour-compression cycle (states 1 to 4 as <see cref="RefrigerationCycles.VapourCompression"/>
+/// Figures of a single-stage vapour-compression cycle (states 1 to 4 as the <see cref="RefrigerationCycles"/> templates
 /// labels them), computed from its <see cref="CycleResult"/>. SI units.
 /// </summary>
 /// <param name="RefrigeratingEffect">q_L = h1 − h4, J/kg.</param>
@@ -80,7 +145,7 @@ public static class RefrigerationCycles
 /// <param name="PressureRatio">p2 / p1.</param>
 /// <param name="VolumetricCapacity">q_L / v1, refrigerating effect per unit volume drawn into the compressor, J/m³.</param>
 /// <param name="EvaporatingTemperature">Saturation temperature at p1, K.</param>
-/// <param name="CondensingTemperature">Saturation temperature at p2, K.</param>
+/// <param name="CondensingTemperature">Saturation temperature at p2, K (for a transcritical cycle the gas-cooler outlet temperature T3).</param>
 /// <param name="CarnotCop">T_evap / (T_cond − T_evap), cooling.</param>
 public sealed record VapourCompressionFigures(
     double RefrigeratingEffect,
@@ -108,7 +173,8 @@ public sealed record VapourCompressionFigures(
         var s3 = cycle["3"].Point;
         var s4 = cycle["4"].Point;
         double qL = s1.H - s4.H, w = s2.H - s1.H;
-        double te = model.SaturationTemperature(s1.P), tc = model.SaturationTemperature(s2.P);
+        double te = model.SaturationTemperature(s1.P);
+        double tc = s2.P < model.CriticalPoint.P ? model.SaturationTemperature(s2.P) : s3.T; // transcritical: the gas-cooler outlet
         return new VapourCompressionFigures(qL, w, qL / w, (s2.H - s3.H) / w, s2.T, s2.P / s1.P, qL / s1.V, te, tc, te / (tc - te));
     }
 }

@@ -84,4 +84,47 @@ public sealed class RefrigerationCyclesTests
         Assert.Contains("critical temperature", ex.Message, StringComparison.Ordinal);
         Assert.Contains("transcritical", ex.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void By_pressure_equals_by_temperature()
+    {
+        var m = Refrigerant.R32;
+        var byT = RefrigerationCycles.VapourCompression(m, Temperature.FromKelvins(263.15), Temperature.FromKelvins(313.15));
+        var byP = RefrigerationCycles.VapourCompression(m, Pressure.FromPascals(m.SaturationPressure(263.15)), Pressure.FromPascals(m.SaturationPressure(313.15)));
+        Assert.Equal(byT.Figures.CopCooling, byP.Figures.CopCooling, 1e-9);
+        Assert.Throws<CycleDefinitionException>(() => RefrigerationCycles.VapourCompression(m, Pressure.FromMegapascals(1), Pressure.FromMegapascals(0.5)));
+    }
+
+    [Fact]
+    public void Transcritical_co2_cycle()
+    {
+        var m = Refrigerant.R744;
+        var cycle = RefrigerationCycles.Transcritical(m, Temperature.FromDegreesCelsius(-5), Temperature.FromDegreesCelsius(35), Pressure.FromMegapascals(9), new VapourCompressionOptions { CompressorEfficiency = 0.7 });
+        var f = VapourCompressionFigures.From(cycle);
+        Assert.Equal(308.15, cycle["3"].Point.T, 1e-6);
+        Assert.Equal(9e6, cycle["3"].Point.P, 1e-3);
+        Assert.True(cycle["4"].Point.IsTwoPhase);
+        Assert.Equal(f.RefrigeratingEffect / f.CompressorWork, cycle.Figures.CopCooling, 1e-9);
+        Assert.True(f.CopCooling > 1 && f.CopCooling < f.CarnotCop);
+        Assert.All(cycle.Checks, c => Assert.True(c.Passed, c.ToString()));
+    }
+
+    [Fact]
+    public void Transcritical_requests_that_would_condense_are_refused()
+    {
+        var ex = Assert.Throws<CycleDefinitionException>(() => RefrigerationCycles.Transcritical(Refrigerant.R134a, Temperature.FromDegreesCelsius(-5), Temperature.FromDegreesCelsius(40), Pressure.FromMegapascals(5)));
+        Assert.Contains("condenses", ex.Message, StringComparison.Ordinal);
+        var low = Assert.Throws<CycleDefinitionException>(() => RefrigerationCycles.Transcritical(Refrigerant.R744, Temperature.FromDegreesCelsius(-5), Temperature.FromDegreesCelsius(35), Pressure.FromMegapascals(6)));
+        Assert.Contains("subcritical", low.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void The_record_carries_the_coefficients_of_performance()
+    {
+        var cycle = RefrigerationCycles.VapourCompression(Refrigerant.R290, Temperature.FromDegreesCelsius(-10), Temperature.FromDegreesCelsius(45));
+        Assert.True(cycle.Figures.NetWork < 0);
+        string md = cycle.ToMarkdown();
+        Assert.Contains("COP, cooling", md, StringComparison.Ordinal);
+        Assert.Contains("R-290", md, StringComparison.Ordinal);
+    }
 }
