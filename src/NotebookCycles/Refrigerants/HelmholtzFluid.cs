@@ -371,7 +371,7 @@ internal sealed class HelmholtzFluid
     /// </summary>
     public bool TryDensity(double t, double p, double rhoLow, double rhoHigh, double guess, out double rho)
     {
-        // Newton in x = ln ρ on f = ln(p(ρ)/p) where p(ρ) > 0, bisection on the bracket otherwise.
+        // Newton in x = ln ρ on f = p(ρ) − p, safeguarded by bisection on the bracket [ln ρlow, ln ρhigh].
         double tau = _tr / t;
         double rt = R * t;
         bool sawLow = rhoLow <= 0, sawHigh = false;

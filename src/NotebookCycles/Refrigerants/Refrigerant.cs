@@ -852,7 +852,6 @@ public sealed class Refrigerant : ISaturationModel
         if (rho < sTriple.RhoLiquid && rho > sTriple.RhoVapour)
         {
             // Inside the dome at the triple point: find where the isochore leaves it, T_b.
-            bool liquidSide = rho >= f.RhoC;
             double a = f.Tt, b = f.Tc;
             for (int i = 0; i < 80 && b - a > 1e-12 * b; i++)
             {
@@ -913,7 +912,6 @@ public sealed class Refrigerant : ISaturationModel
             }
 
             tLo = tb;
-            _ = liquidSide;
         }
 
         var fn = new IsochoreFunction(f, rho, property, raw);
