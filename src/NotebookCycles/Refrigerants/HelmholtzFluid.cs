@@ -34,9 +34,8 @@ internal sealed class HelmholtzFluid
         R = data.MolarGasConstant / data.MolarMass;
         _tr = data.ReducingTemperature;
         _rhor = data.ReducingDensity;
-        Tc = data.CriticalTemperature;
-        RhoC = data.CriticalDensity;
-        Pc = data.CriticalPressure;
+        (Tc, RhoC) = RefineCriticalPoint(data.CriticalTemperature, data.CriticalDensity);
+        Pc = Pressure(Tc, RhoC);
         Tt = data.TripleTemperature;
         RhoMax = 6 * _rhor;
         _uMax = Math.Cbrt(1 - Tt / Tc);
@@ -195,6 +194,7 @@ internal sealed class HelmholtzFluid
         ResidualParts rl = default, rv = default;
         bool converged = false;
         double pSat = double.NaN;
+        double bestResidual = double.PositiveInfinity, bestL = double.NaN, bestV = double.NaN, bestP = double.NaN;
         for (int it = 0; it < 60; it++)
         {
             rl = _eq.Residual(dl, tau);
@@ -229,8 +229,26 @@ internal sealed class HelmholtzFluid
                 break;
             }
 
+            // Within millikelvins of Tc the equations J″ = J′, K″ = K′ reach their rounding floor while the
+            // ill-conditioned steps still jitter at up to 1e-6 of δ: keep the iterate of smallest residual and accept
+            // it below (at most 1e-12 relative).
+            double residual = Math.Abs(f1) / Math.Max(1, jv) + Math.Abs(f2) / Math.Max(1, Math.Abs(kv));
+            if (t > 0.999 * Tc && residual < bestResidual)
+            {
+                bestResidual = residual;
+                bestL = dl;
+                bestV = dv;
+                bestP = dv * _rhor * R * t * (1 + rv.D);
+            }
+
             dl += lambda * stepL;
             dv += lambda * stepV;
+        }
+
+        if (!converged && bestResidual < 1e-12)
+        {
+            (dl, dv, pSat) = (bestL, bestV, bestP);
+            converged = true;
         }
 
         rlOut = rl;
@@ -426,6 +444,50 @@ internal sealed class HelmholtzFluid
 
         rho = Math.Exp(x);
         return false;
+    }
+
+    /// <summary>
+    /// The critical point of the equation: (∂p/∂ρ)_T = 0 and (∂²p/∂ρ²)_T = 0, by Newton from the coefficient file's
+    /// value with central differences of k = 1 + 2δαʳ_δ + δ²αʳ_δδ; the file's value is kept if Newton does not settle.
+    /// </summary>
+    private (double T, double Rho) RefineCriticalPoint(double t0, double rho0)
+    {
+        double tau = _tr / t0, delta = rho0 / _rhor;
+        double K(double d, double tt)
+        {
+            var r = _eq.Residual(d, tt);
+            return (1 + 2 * r.D + r.DD) / d; // ∝ (∂p/∂ρ)_T / T
+        }
+
+        const double h = 1e-4;
+        for (int it = 0; it < 30; it++)
+        {
+            double k0 = K(delta, tau);
+            double kp = K(delta + h, tau), km = K(delta - h, tau);
+            double k1 = (kp - km) / (2 * h); // ∂k/∂δ
+            double kt = (K(delta, tau + h) - K(delta, tau - h)) / (2 * h);
+            double k1t = ((K(delta + h, tau + h) - K(delta - h, tau + h)) - (K(delta + h, tau - h) - K(delta - h, tau - h))) / (4 * h * h);
+            double k2 = (kp - 2 * k0 + km) / (h * h);
+            // Newton on F = (k, ∂k/∂δ): J = [[∂k/∂δ, ∂k/∂τ], [∂²k/∂δ², ∂²k/∂δ∂τ]].
+            double a11 = k1, a12 = kt, a21 = k2, a22 = k1t;
+            double det = a11 * a22 - a12 * a21;
+            double dd = -(k0 * a22 - a12 * k1) / det;
+            double dt = -(a11 * k1 - a21 * k0) / det;
+            if (!double.IsFinite(dd) || !double.IsFinite(dt))
+            {
+                return (t0, rho0);
+            }
+
+            delta += dd;
+            tau += dt;
+            if (Math.Abs(dd) < 1e-10 && Math.Abs(dt) < 1e-11)
+            {
+                double t = _tr / tau, rho = delta * _rhor;
+                return Math.Abs(t - t0) < 1e-3 * t0 && Math.Abs(rho - rho0) < 0.05 * rho0 ? (t, rho) : (t0, rho0);
+            }
+        }
+
+        return (t0, rho0);
     }
 
     private void BuildTable(double[] lnP, double[] lnL, double[] lnV, double[] kL)

@@ -587,9 +587,10 @@ public sealed class Refrigerant : ISaturationModel
             var l = f.Evaluate(s.T, s.RhoLiquid);
             var v = f.Evaluate(s.T, s.RhoVapour);
             double yl = Pick(l, property), yv = Pick(v, property);
-            if (raw >= yl && raw <= yv)
+            double slack = 1e-12 * (Math.Abs(yl) + Math.Abs(yv)); // a saturated end recomputed from its own p
+            if (raw >= yl - slack && raw <= yv + slack)
             {
-                return Mix(s, (raw - yl) / (yv - yl), l, v);
+                return Mix(s, Math.Clamp((raw - yl) / (yv - yl), 0, 1), l, v);
             }
 
             if (raw < yl)
@@ -636,6 +637,24 @@ public sealed class Refrigerant : ISaturationModel
         {
             fLo = fn.Evaluate(tLo, out _);
             fHi = fn.Evaluate(tHi, out _);
+            double slack = Slack(property, raw, value);
+            if (fLo > 0 && fLo <= slack)
+            {
+                fLo = 0;
+            }
+
+            if (fHi < 0 && fHi >= -slack)
+            {
+                fHi = 0;
+            }
+
+            if (fLo == 0 || fHi == 0)
+            {
+                double tEnd = fLo == 0 ? tLo : tHi;
+                fn.Evaluate(tEnd, out _);
+                return Single(tEnd, fn.LastRho);
+            }
+
             if (!(fLo <= 0 && fHi >= 0))
             {
                 RefuseIsobar(p, property, value, raw, branch, tLo, tHi, fLo, fHi);
@@ -669,21 +688,32 @@ public sealed class Refrigerant : ISaturationModel
             if (!(d > 0 && next > lo && next < hi))
             {
                 // Leaving the bracket: confirm the far end's sign once (out of range otherwise), then bisect.
+                double slack = Slack(property, raw, value);
                 if (double.IsNaN(fLo) && lo == tLo)
                 {
                     fLo = fn.Evaluate(tLo, out _);
-                    if (fLo > 0)
+                    if (fLo > slack)
                     {
                         RefuseIsobar(p, property, value, raw, branch, tLo, tHi, fLo, fx);
+                    }
+
+                    if (fLo >= 0)
+                    {
+                        return Single(tLo, fn.LastRho);
                     }
                 }
 
                 if (double.IsNaN(fHi) && hi == tHi)
                 {
                     fHi = fn.Evaluate(tHi, out _);
-                    if (fHi < 0)
+                    if (fHi < -slack)
                     {
                         RefuseIsobar(p, property, value, raw, branch, tLo, tHi, fx, fHi);
+                    }
+
+                    if (fHi <= 0)
+                    {
+                        return Single(tHi, fn.LastRho);
                     }
                 }
 
@@ -708,6 +738,15 @@ public sealed class Refrigerant : ISaturationModel
         fn.Evaluate(t, out _);
         return Single(t, fn.LastRho);
     }
+
+    /// <summary>Rounding allowance for a value at a range end recomputed through the reference-state offset.</summary>
+    private static double Slack(StateProperty property, double raw, double value) =>
+        1e-11 * (Math.Abs(raw) + Math.Abs(value) + property switch
+        {
+            StateProperty.Enthalpy or StateProperty.InternalEnergy => 1e3,
+            StateProperty.Entropy => 1,
+            _ => 0,
+        });
 
     [System.Diagnostics.CodeAnalysis.DoesNotReturn]
     private void RefuseIsobar(double p, StateProperty property, double value, double raw, Branch branch, double tLo, double tHi, double fLo, double fHi)
@@ -770,9 +809,10 @@ public sealed class Refrigerant : ISaturationModel
             var l = f.Evaluate(t, s.RhoLiquid);
             var v = f.Evaluate(t, s.RhoVapour);
             double yl = Pick(l, property), yv = Pick(v, property);
-            if (raw >= Math.Min(yl, yv) && raw <= Math.Max(yl, yv))
+            double slack = 1e-12 * (Math.Abs(yl) + Math.Abs(yv));
+            if (raw >= Math.Min(yl, yv) - slack && raw <= Math.Max(yl, yv) + slack)
             {
-                return Mix(s, (raw - yl) / (yv - yl), l, v);
+                return Mix(s, Math.Clamp((raw - yl) / (yv - yl), 0, 1), l, v);
             }
 
             // Entropy and enthalpy of the vapour exceed those of the liquid: the vapour side is the low-density branch.
