@@ -580,14 +580,15 @@ public sealed class Refrigerant : ISaturationModel
         double tLo = f.Tt, tHi = f.Data.MaximumTemperature;
         Branch branch = Branch.Single;
         SaturationPoint? sat = null;
-        if (p < f.Pc && p >= f.TriplePressure)
+        if (p < f.Pc && p >= _pSatRange.Minimum)
         {
             var s = SaturationRawP(p, StateProperty.Pressure, p, property, value);
             sat = s;
             var l = f.Evaluate(s.T, s.RhoLiquid);
             var v = f.Evaluate(s.T, s.RhoVapour);
             double yl = Pick(l, property), yv = Pick(v, property);
-            double slack = 1e-12 * (Math.Abs(yl) + Math.Abs(yv)); // a saturated end recomputed from its own p
+            // A saturated end recomputed from its own p: rounding, and next to Tc the equilibrium's own resolution.
+            double slack = 1e-12 * (Math.Abs(yl) + Math.Abs(yv)) + (s.T > 0.999 * f.Tc ? 1e-7 : 1e-10) * Math.Abs(yv - yl);
             if (raw >= yl - slack && raw <= yv + slack)
             {
                 return Mix(s, Math.Clamp((raw - yl) / (yv - yl), 0, 1), l, v);
@@ -604,7 +605,7 @@ public sealed class Refrigerant : ISaturationModel
                 tLo = s.T;
             }
         }
-        else if (p < f.TriplePressure)
+        else if (p < _pSatRange.Minimum)
         {
             branch = Branch.Vapour;
         }
@@ -809,7 +810,7 @@ public sealed class Refrigerant : ISaturationModel
             var l = f.Evaluate(t, s.RhoLiquid);
             var v = f.Evaluate(t, s.RhoVapour);
             double yl = Pick(l, property), yv = Pick(v, property);
-            double slack = 1e-12 * (Math.Abs(yl) + Math.Abs(yv));
+            double slack = 1e-12 * (Math.Abs(yl) + Math.Abs(yv)) + (t > 0.999 * f.Tc ? 1e-7 : 1e-10) * Math.Abs(yv - yl);
             if (raw >= Math.Min(yl, yv) - slack && raw <= Math.Max(yl, yv) + slack)
             {
                 return Mix(s, Math.Clamp((raw - yl) / (yv - yl), 0, 1), l, v);
