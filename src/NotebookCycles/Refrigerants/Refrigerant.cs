@@ -736,8 +736,8 @@ public sealed class Refrigerant : ISaturationModel
             throw new NonConvergenceException($"{Name}: T at p = {p} Pa, {property.Symbol()} = {value} did not converge.");
         }
 
-        fn.Evaluate(t, out _);
-        return Single(t, fn.LastRho);
+        var bAt = t >= f.Tc ? Branch.Single : (branch == Branch.Single ? Branch.Liquid : branch);
+        return Single(t, DensityAt(t, p, bAt, fn.LastRho));
     }
 
     /// <summary>Rounding allowance for a value at a range end recomputed through the reference-state offset.</summary>

@@ -173,9 +173,14 @@ internal sealed partial class RefrigerantData
         string volume = eq.TryGetProperty("volume", out var v) ? " " + v.ToString() : "";
         string pages = eq.TryGetProperty("pages", out var p) ? ", " + p.GetString() : "";
         string citation = $"{authors}, \"{eq.GetProperty("title").GetString()}\", {eq.GetProperty("journal").GetString()}{volume}{pages} ({year}){doi}";
-        string firstAuthor = authors.Split(',')[0].Trim();
-        string surname = firstAuthor.Split(' ')[^1];
-        string shortSource = authors.Contains(',', StringComparison.Ordinal) ? $"{surname} et al. ({year})" : $"{surname} ({year})";
+        string[] names = authors.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries);
+        static string Surname(string name) => name.Split(' ')[^1];
+        string shortSource = names.Length switch
+        {
+            1 => $"{Surname(names[0])} ({year})",
+            2 => $"{Surname(names[0])} & {Surname(names[1])} ({year})",
+            _ => $"{Surname(names[0])} et al. ({year})",
+        };
 
         return new RefrigerantData
         {
