@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using NotebookCycles.Properties;
 using UnitsNet;
 
@@ -130,6 +131,131 @@ public static class RefrigerationCycles
             .Cool("3", toTemperature: gasCoolerOutlet)
             .Throttle("4", toPressure: pe)
             .Heat(backTo: "1");
+    }
+    /// <summary>
+    /// Two-stage vapour compression with a flash tank (open flash intercooler): 1 = evaporator outlet (saturated vapour
+    /// plus the superheat) → low-stage compressor to the intermediate pressure → 2 → mixing with the flash tank's
+    /// saturated vapour → 3 → high-stage compressor → 4 → condenser → 5 (saturated liquid minus the subcooling) →
+    /// valve to the intermediate pressure → 6 → flash tank: the vapour goes to the mixer, the saturated liquid on →
+    /// 7 → valve → 8 → evaporator back to 1. The vapour fraction is solved by repeated passes of the chain; figures are
+    /// per unit mass through the condenser (the evaporator carries 1 − x6). The intermediate pressure defaults to
+    /// the geometric mean √(p_evap·p_cond).
+    /// </summary>
+    public static CycleResult TwoStageFlashTank(ISaturationModel refrigerant, Temperature evaporating, Temperature condensing, Pressure? intermediatePressure = null, VapourCompressionOptions? design = null, string title = "Two-stage vapour-compression cycle with flash tank", CycleOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(refrigerant);
+        design ??= new VapourCompressionOptions();
+        // The same design checks as the single-stage cycle.
+        double te = evaporating.Kelvins, tc = condensing.Kelvins, tcrit = refrigerant.CriticalPoint.T;
+        if (!(te < tc))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the evaporating temperature {Units.SiText.Format(StateProperty.Temperature, te)} must be below the condensing temperature {Units.SiText.Format(StateProperty.Temperature, tc)}.");
+        }
+
+        if (!(tc < tcrit))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the condensing temperature {Units.SiText.Format(StateProperty.Temperature, tc)} is not below the critical temperature of {refrigerant.Name} ({Units.SiText.Format(StateProperty.Temperature, tcrit)}): there is no condensation; a transcritical cycle with a gas cooler is needed.");
+        }
+
+        double pe = refrigerant.SaturationPressure(te), pc = refrigerant.SaturationPressure(tc);
+        double pi = intermediatePressure?.Pascals ?? Math.Sqrt(pe * pc);
+        if (!(pi > pe && pi < pc))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"the intermediate pressure {Units.SiText.Pressure(pi)} must lie between the evaporator ({Units.SiText.Pressure(pe)}) and the condenser ({Units.SiText.Pressure(pc)}).");
+        }
+
+        double sh = design.Superheat.Kelvins, sc = design.Subcooling.Kelvins;
+        if (!(sh >= 0) || !(sc >= 0) || !double.IsFinite(sh) || !double.IsFinite(sc))
+        {
+            throw new CycleDefinitionException(title, "design", null, $"superheat ({Units.SiText.Number(sh)} K) and subcooling ({Units.SiText.Number(sc)} K) must be finite and not negative.");
+        }
+
+        var pEvap = Pressure.FromPascals(pe);
+        var pMid = Pressure.FromPascals(pi);
+        var chain = Cycle.SteadyFlow(title, refrigerant, options);
+        chain = sh > 0 ? chain.Start("1", T: Temperature.FromKelvins(te + sh), p: pEvap) : chain.Start("1", p: pEvap, x: 1);
+        chain = chain.Compress("2", toPressure: pMid, efficiency: design.CompressorEfficiency);
+        chain = new FlowCycle(chain.Chain.Then(new FlashVapourMixingSpec("3", "6")));
+        chain = chain.Compress("4", toPressure: Pressure.FromPascals(pc), efficiency: design.CompressorEfficiency);
+        chain = sc > 0 ? chain.Condense("5", toTemperature: Temperature.FromKelvins(tc - sc)) : chain.Condense("5", toQuality: 0);
+        chain = chain.Throttle("6", toPressure: pMid);
+        chain = new FlowCycle(chain.Chain.Then(new FlashTankLiquidSpec("7")));
+        return chain.Throttle("8", toPressure: pEvap).Heat(backTo: "1");
+    }
+}
+
+/// <summary>
+/// Adiabatic mixing of the stream with the saturated vapour a flash tank at the same pressure sends back: the vapour
+/// flow y = x·m/(1 − x) follows from the quality x of the flash tank's inlet state (computed later in the chain,
+/// taken from the previous pass) and leaves the stream after that state.
+/// </summary>
+internal sealed class FlashVapourMixingSpec(string label, string flashInlet) : ProcessSpec(label)
+{
+    public override string Describe => "mixing with flash-tank vapour";
+
+    public override void Apply(SolveContext c)
+    {
+        var a = c.Current.Point;
+        string to = Label!;
+        var vapour = c.Compute(to, StateProperty.Pressure, a.P, StateProperty.Quality, 1);
+        var flash = c.Anywhere(flashInlet);
+        double m = c.Flow, y = 0;
+        if (flash is not null)
+        {
+            if (Math.Abs(flash.Point.P - a.P) > 1e-9 * a.P)
+            {
+                throw c.Error(to, $"the flash tank (state {flashInlet}, p = {Units.SiText.Pressure(flash.Point.P)}) is not at the mixing pressure {Units.SiText.Pressure(a.P)}.");
+            }
+
+            double x = flash.Point.IsTwoPhase ? flash.Point.X : 0;
+            y = x * m / (1 - x);
+        }
+
+        double h = (m * a.H + y * vapour.H) / (m + y);
+        var b = c.Compute(to, StateProperty.Pressure, a.P, StateProperty.Enthalpy, h);
+        c.AddBleed(flashInlet, y);
+        double mOut = m + y;
+        double sgen = (mOut * b.S - m * a.S - y * vapour.S) / mOut;
+        ImmutableArray<RecordLine> lines = default;
+        if (c.Record)
+        {
+            lines =
+            [
+                Rec.Line("y", $"x{flashInlet}·m/(1 − x{flashInlet})", "", Rec.N(y)),
+                Rec.Line("h" + to, "(m·h + y·h″)/(m + y)", "({0} × {1} + {2} × {3}) / ({0} + {2})", Rec.E(b.H), Rec.N(m), Rec.E(a.H), Rec.N(y), Rec.E(vapour.H)),
+            ];
+        }
+
+        c.AddStep("Mixing with flash-tank vapour", PathLaw.Undefined, c.NewState(to, b), 0, 0, lines: lines, assumptions: ["adiabatic mixing at constant pressure", "flash-tank vapour saturated", "steady flow"], entropyGenerated: sgen, flowAfter: mOut, stepFlow: mOut);
+    }
+}
+
+/// <summary>
+/// The liquid outlet of a flash tank: the two-phase inlet separates into saturated vapour (sent back to the mixer; it
+/// left the stream after the inlet state) and saturated liquid at the same pressure, which continues.
+/// </summary>
+internal sealed class FlashTankLiquidSpec(string label) : ProcessSpec(label)
+{
+    public override string Describe => "flash tank, liquid outlet";
+
+    public override void Apply(SolveContext c)
+    {
+        var a = c.Current.Point;
+        string to = Label!;
+        if (!a.IsTwoPhase)
+        {
+            throw c.Error(to, $"the flash tank's inlet (state {c.Current.Label}) is not a liquid-vapour mixture; raise the condenser pressure or lower the intermediate pressure.");
+        }
+
+        var b = c.Compute(to, StateProperty.Pressure, a.P, StateProperty.Quality, 0);
+        ImmutableArray<RecordLine> lines = default;
+        if (c.Record)
+        {
+            lines = [Rec.Lookup(c, to, "h", Rec.E(b.H), "p", Rec.P(b.P), "x", Rec.N(0))];
+        }
+
+        // Separating the phases of an equilibrium mixture generates no entropy.
+        c.AddStep("Flash tank (saturated liquid out)", PathLaw.Undefined, c.NewState(to, b), 0, 0, lines: lines, assumptions: ["adiabatic", "phases separated at equilibrium"], entropyGenerated: 0);
     }
 }
 

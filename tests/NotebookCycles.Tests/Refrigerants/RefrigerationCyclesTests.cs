@@ -127,4 +127,35 @@ public sealed class RefrigerationCyclesTests
         Assert.Contains("COP, cooling", md, StringComparison.Ordinal);
         Assert.Contains("R-290", md, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Two_stage_flash_tank_cycle_matches_a_direct_computation()
+    {
+        var m = Refrigerant.R717;
+        var cycle = RefrigerationCycles.TwoStageFlashTank(m, Temperature.FromDegreesCelsius(-30), Temperature.FromDegreesCelsius(40));
+        Assert.All(cycle.Checks, c => Assert.True(c.Passed, c.ToString()));
+
+        // Direct computation with the same model, per unit mass through the condenser (mass balances by hand).
+        double pe = m.SaturationPressure(243.15), pc = m.SaturationPressure(313.15), pi = Math.Sqrt(pe * pc);
+        var s1 = m.FromPX(pe, 1);
+        var s2 = m.FromPS(pi, s1.S);
+        var s5 = m.FromPX(pc, 0);
+        double x6 = m.FromPH(pi, s5.H).X;
+        var g = m.FromPX(pi, 1);
+        var f = m.FromPX(pi, 0);
+        double h3 = (1 - x6) * s2.H + x6 * g.H;
+        var s3 = m.FromPH(pi, h3);
+        var s4 = m.FromPS(pc, s3.S);
+        double qEvap = (1 - x6) * (s1.H - f.H);
+        double work = (1 - x6) * (s2.H - s1.H) + (s4.H - s3.H);
+        Assert.Equal(qEvap / work, cycle.Figures.CopCooling, 1e-9 * qEvap / work);
+        Assert.Equal(s4.T, cycle["4"].Point.T, 1e-6);
+        Assert.Equal(x6, cycle["6"].Point.X, 1e-10);
+
+        var single = RefrigerationCycles.VapourCompression(m, Temperature.FromDegreesCelsius(-30), Temperature.FromDegreesCelsius(40));
+        Assert.True(cycle.Figures.CopCooling > single.Figures.CopCooling);
+        Assert.True(cycle["4"].Point.T < single["2"].Point.T);
+        Assert.Contains("Mixing with flash-tank vapour", cycle.ToMarkdown(), StringComparison.Ordinal);
+        Assert.Throws<CycleDefinitionException>(() => RefrigerationCycles.TwoStageFlashTank(m, Temperature.FromDegreesCelsius(-30), Temperature.FromDegreesCelsius(40), Pressure.FromPascals(pe / 2)));
+    }
 }
