@@ -54,6 +54,7 @@ public sealed class Refrigerant : ISaturationModel
 {
     private const double MinimumPressure = 1e-6;
     private static readonly ConcurrentDictionary<string, HelmholtzFluid> Fluids = new(StringComparer.Ordinal);
+    private static readonly ConcurrentDictionary<(string Key, ReferenceState Reference), Refrigerant> Instances = new();
     private static readonly string[] NameList = ["R134a", "R32", "R1234yf", "R744", "R717", "R717-1993", "R290"];
 
     private readonly HelmholtzFluid _f;
@@ -174,13 +175,18 @@ public sealed class Refrigerant : ISaturationModel
             "R290" or "R-290" or "PROPANE" => "R290",
             _ => throw new ArgumentException($"Unknown refrigerant '{name}'; known: {string.Join(", ", NameList)}.", nameof(name)),
         };
-        string file = key == "R717" ? "R717_Gao2023" : key == "R717-1993" ? "R717" : key;
-        var fluid = Fluids.GetOrAdd(file, f => new HelmholtzFluid(RefrigerantData.Load(f)));
-        return new Refrigerant(fluid, key, reference, SaturationPolicy.Throw);
+        // One instance per fluid and reference state, so states and cycles built from separate calls share the model.
+        return Instances.GetOrAdd((key, reference), k =>
+        {
+            string file = k.Key == "R717" ? "R717_Gao2023" : k.Key == "R717-1993" ? "R717" : k.Key;
+            var fluid = Fluids.GetOrAdd(file, f => new HelmholtzFluid(RefrigerantData.Load(f)));
+            return new Refrigerant(fluid, k.Key, k.Reference, SaturationPolicy.Throw);
+        });
     }
 
-    /// <summary>The same fluid in another reference state.</summary>
-    public Refrigerant WithReference(ReferenceState reference) => new(_f, Key, reference, OnSaturation);
+    /// <summary>The same fluid in another reference state (the shared instance when the saturation policy is the default).</summary>
+    public Refrigerant WithReference(ReferenceState reference) =>
+        OnSaturation == SaturationPolicy.Throw ? Get(Key, reference) : new(_f, Key, reference, OnSaturation);
 
     /// <summary>The same fluid with another rule for (T, p) pairs on the saturation line.</summary>
     public Refrigerant WithSaturationPolicy(SaturationPolicy policy) => new(_f, Key, Reference, policy);

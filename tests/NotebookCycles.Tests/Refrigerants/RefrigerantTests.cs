@@ -16,6 +16,8 @@ public sealed class RefrigerantTests
         Assert.Contains("Gao", Refrigerant.R717.Citation, StringComparison.Ordinal);
         Assert.Contains("Tillner-Roth", Refrigerant.R717TillnerRoth.Citation, StringComparison.Ordinal);
         Assert.Equal("R-744", Refrigerant.Get("CO2").Fluid);
+        Assert.Same(Refrigerant.R134a, Refrigerant.Get("R-134a"));
+        Assert.Same(Refrigerant.R32.WithReference(ReferenceState.Ashrae), Refrigerant.Get("R32", ReferenceState.Ashrae));
     }
 
     [Theory]
