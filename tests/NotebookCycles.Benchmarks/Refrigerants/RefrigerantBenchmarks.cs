@@ -8,6 +8,7 @@ namespace NotebookCycles.Benchmarks.Refrigerants;
 
 /// <summary>Refrigerant states from the Helmholtz-energy equations and a whole vapour-compression cycle.</summary>
 [MemoryDiagnoser]
+[MedianColumn]
 public class RefrigerantBenchmarks
 {
     private static readonly CycleOptions NoRecord = new() { Record = false };
@@ -53,6 +54,10 @@ public class RefrigerantBenchmarks
     /// <summary>R-134a two-phase state from (p, h).</summary>
     [Benchmark]
     public StatePoint R134aTwoPhaseFromPH() => _r134a.FromPH(3e5, _hTwoPhase);
+
+    /// <summary>R-717 two-stage cycle with flash tank (repeated passes for the flash fraction), no record.</summary>
+    [Benchmark]
+    public CycleResult R717TwoStageNoRecord() => RefrigerationCycles.TwoStageFlashTank(Refrigerant.R717, _te, _tc, options: NoRecord);
 
     /// <summary>A single-stage R-134a vapour-compression cycle without the calculation record.</summary>
     [Benchmark]
