@@ -158,14 +158,6 @@ internal static class ChainSolver
         return true;
     }
 
-    /// <summary>
-    /// Relative round-off allowed in a step's entropy balance for models with a saturation line. IAPWS-IF97's region 1
-    /// and 2 equations meet its saturation equation only approximately: h'' − h' − T_s(s'' − s') is up to about 5e-6 of
-    /// h'' − h' (measured with this library's IF97 at 8 kPa to 7 MPa), so a condensation between saturated states shows
-    /// an s_gen of that relative size and either sign. Other models keep 1e-9.
-    /// </summary>
-    private const double SaturationConsistency = 2e-5;
-
     private static CycleResult Finish(SolveContext c, State start, double startFlow)
     {
         var steps = c.Steps;
@@ -209,7 +201,7 @@ internal static class ChainSolver
 
             sgenTotal += m * step.EntropyGenerated;
             double scale = Math.Max(Math.Max(Math.Abs(step.DeltaS), step.Q == 0 ? 0 : Math.Abs(step.Q / step.BoundaryTemperature)), 1.0);
-            double tolerance = (c.Model.HasSaturation ? SaturationConsistency : 1e-9) * scale;
+            double tolerance = Math.Max(1e-9, c.Model.ConsistencyTolerance) * scale;
             if (step.EntropyGenerated < -tolerance)
             {
                 c.CurrentStepDescription = $"step {step.Index}, {step.Process.ToLowerInvariant()} {step.Name}";

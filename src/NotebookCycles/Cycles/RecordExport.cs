@@ -305,6 +305,4 @@ internal static class RecordExport
             json.WriteNull(name);
         }
     }
-
-    internal static string Invariant(double value) => value.ToString("R", CultureInfo.InvariantCulture);
 }

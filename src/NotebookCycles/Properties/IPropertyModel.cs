@@ -28,6 +28,13 @@ public interface IPropertyModel
     /// <summary>True when the model has a liquid-vapour saturation region (water, refrigerants).</summary>
     bool HasSaturation { get; }
 
+    /// <summary>
+    /// How closely the model's equations agree with each other, relative: for example how well its saturation line
+    /// satisfies the Clausius relation h_fg = T·s_fg. Balance checks (entropy generated ≥ 0) allow this much before
+    /// calling a result impossible. 1e-9 for models that are exactly consistent (ideal gases).
+    /// </summary>
+    double ConsistencyTolerance => 1e-9;
+
     /// <summary>State from temperature (K) and pressure (Pa).</summary>
     StatePoint FromTP(double temperature, double pressure);
 
