@@ -12,8 +12,8 @@ namespace NotebookCycles.Cli;
 /// <summary><c>nbcycles state</c>: one state of a property model from two inputs with units.</summary>
 public static class StateCommand
 {
-    /// <summary>The model names the command knows (any NASA Glenn species name, such as N2 or CO2, also works).</summary>
-    public static IReadOnlyList<string> ModelNames { get; } = ["air", "cold-air", "water", "steam", "<gas species, e.g. N2, CO2, H2O>"];
+    /// <summary>The model names the command knows (any NASA Glenn species name, such as N2 or CO2, and any refrigerant name also work).</summary>
+    public static IReadOnlyList<string> ModelNames { get; } = ["air", "cold-air", "water", "steam", "<refrigerant, e.g. R134a, R32, R1234yf, R744, R717, R290>", "<gas species, e.g. N2, CO2, H2O>"];
 
     /// <summary>The property model for a name; an unknown name raises <see cref="CliException"/> listing the known ones.</summary>
     public static IPropertyModel Model(string name)
@@ -37,7 +37,14 @@ public static class StateCommand
             return IdealGas.Species(name.Trim());
         }
 
-        throw new CliException($"unknown model '{name}': use air, cold-air, water (or steam), or a gas species name such as N2, O2, CO2, H2O.");
+        try
+        {
+            return Refrigerants.Refrigerant.Get(name);
+        }
+        catch (ArgumentException)
+        {
+            throw new CliException($"unknown model '{name}': use air, cold-air, water (or steam), a refrigerant ({string.Join(", ", Refrigerants.Refrigerant.Names)}), or a gas species name such as N2, O2, CO2, H2O.");
+        }
     }
 
     /// <summary>Solves the state from two "property=value unit" inputs.</summary>
