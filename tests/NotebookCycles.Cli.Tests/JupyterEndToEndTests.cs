@@ -38,25 +38,58 @@ public sealed class JupyterEndToEndTests(ITestOutputHelper output)
             ["DOTNET_NOLOGO"] = "1",
         };
         var limit = TimeSpan.FromMinutes(4);
+        string[] outputs = [];
 
         Step("dotnet", ["tool", "restore"], root, env, limit);
-        string feed = Path.Combine(root, "artifacts", "feed");
-        Step("dotnet", ["pack", Path.Combine(root, "src", "NotebookCycles.Interactive", "NotebookCycles.Interactive.csproj"), "-c", Configuration, "--no-build", "-p:BuildProjectReferences=false", "-p:NuspecOutputPath=" + work.File("nuspec") + Path.DirectorySeparatorChar, "-o", feed, "-nologo"], root, env, limit);
-        // The notebooks ask for version 0.1.0: drop a cached copy so this build's package is the one restored.
-        string cache = Environment.GetEnvironmentVariable("NUGET_PACKAGES") is { Length: > 0 } custom ? custom : Path.Combine(Environment.GetFolderPath(Environment.SpecialFolder.UserProfile), ".nuget", "packages");
-        string cached = Path.Combine(cache, "notebookcycles.interactive", "0.1.0");
-        if (Directory.Exists(cached))
+
+        // The package under a version of this run's own, in a feed of this run's own: the NuGet cache is shared by
+        // everything on the machine, so a fixed version could be served from a copy another build put there.
+        string version = "0.1.0-e2e" + DateTime.UtcNow.ToString("yyyyMMddHHmmssfff", System.Globalization.CultureInfo.InvariantCulture);
+        string feed = work.File("feed");
+        Step("dotnet", ["pack", Path.Combine(root, "src", "NotebookCycles.Interactive", "NotebookCycles.Interactive.csproj"), "-c", Configuration, "--no-build", "-p:BuildProjectReferences=false", "-p:PackageVersion=" + version, "-p:NuspecOutputPath=" + work.File("nuspec") + Path.DirectorySeparatorChar, "-o", feed, "-nologo"], root, env, limit);
+
+        // The demo memos as committed, except that their package cell names this run's feed and version. The copies
+        // live inside the repository so the kernelspec finds the local tool manifest from the notebooks' folder.
+        var sources = Directory.GetFiles(Path.Combine(root, "notebooks-demo"), "*.ipynb").OrderBy(n => n, StringComparer.Ordinal).ToArray();
+        Assert.True(sources.Length >= 4);
+        string copies = Path.Combine(root, "artifacts", "e2e-notebooks-" + version);
+        Directory.CreateDirectory(copies);
+        var notebooks = new List<string>();
+        try
         {
-            Directory.Delete(cached, recursive: true);
+            foreach (string source in sources)
+            {
+                string text = File.ReadAllText(source);
+                const string FeedExpression = "System.IO.Path.GetFullPath(System.IO.Path.Combine(\\\"..\\\", \\\"artifacts\\\", \\\"feed\\\"))";
+                const string VersionText = "NotebookCycles.Interactive, 0.1.0";
+                Assert.Contains(FeedExpression, text, StringComparison.Ordinal);
+                Assert.Contains(VersionText, text, StringComparison.Ordinal);
+                text = text.Replace(FeedExpression, "\\\"" + feed.Replace("\\", "/", StringComparison.Ordinal) + "\\\"", StringComparison.Ordinal)
+                           .Replace(VersionText, "NotebookCycles.Interactive, " + version, StringComparison.Ordinal);
+                string copy = Path.Combine(copies, Path.GetFileName(source));
+                File.WriteAllText(copy, text);
+                notebooks.Add(copy);
+            }
+
+            string executed = work.File("executed");
+            Step("jupyter-nbconvert", ["--to", "notebook", "--execute", "--ExecutePreprocessor.timeout=180", "--output-dir", executed, .. notebooks], copies, env, limit);
+            outputs = notebooks.Select(n => Path.Combine(executed, Path.GetFileName(n))).ToArray();
+        }
+        finally
+        {
+            Directory.Delete(copies, recursive: true);
+            string cache = Environment.GetEnvironmentVariable("NUGET_PACKAGES") is { Length: > 0 } custom ? custom : Path.Combine(Environment.GetFolderPath(Environment.SpecialFolder.UserProfile), ".nuget", "packages");
+            string cached = Path.Combine(cache, "notebookcycles.interactive", version);
+            if (Directory.Exists(cached))
+            {
+                Directory.Delete(cached, recursive: true);
+            }
         }
 
-        var notebooks = Directory.GetFiles(Path.Combine(root, "notebooks-demo"), "*.ipynb").OrderBy(n => n, StringComparer.Ordinal).ToArray();
-        Assert.True(notebooks.Length >= 4);
-        string executed = work.File("executed");
-        Step("jupyter-nbconvert", ["--to", "notebook", "--execute", "--ExecutePreprocessor.timeout=180", "--output-dir", executed, .. notebooks], root, env, limit);
-        var outputs = notebooks.Select(n => Path.Combine(executed, Path.GetFileName(n))).ToArray();
         foreach (string nb in outputs)
         {
+            // Restored from this run's feed: the kernel lists the installed package with this run's version.
+            Assert.Contains("NotebookCycles.Interactive, " + version, File.ReadAllText(nb), StringComparison.Ordinal);
             var cells = JsonNode.Parse(File.ReadAllText(nb))!["cells"]!.AsArray();
             var errors = cells.SelectMany(c => c!["outputs"]?.AsArray() ?? []).Where(o => (string?)o!["output_type"] == "error").Select(o => (string?)o!["evalue"]).ToList();
             Assert.True(errors.Count == 0, Path.GetFileName(nb) + ": " + string.Join("\n", errors));
@@ -65,7 +98,7 @@ public sealed class JupyterEndToEndTests(ITestOutputHelper output)
         Step("jupyter-nbconvert", ["--to", "html", "--output-dir", work.File("html"), .. outputs], root, env, limit);
         string shots = Path.Combine(root, "artifacts", "e2e");
         Directory.CreateDirectory(shots);
-        foreach (string nb in notebooks)
+        foreach (string nb in outputs)
         {
             string name = Path.GetFileNameWithoutExtension(nb);
             string page = "file://" + work.File(Path.Combine("html", name + ".html"));
