@@ -63,9 +63,10 @@ public static class SweepHtml
     /// <summary>
     /// The optimum: the parameter value ± tolerance, the objective, whether a constraint is active, the number of cycles
     /// solved, the scan chart with the optimum marked (<paramref name="figure"/>, default <see cref="SweepSvg.ObjectiveFigure"/>),
-    /// and the optimum cycle's full report (<see cref="CycleHtml.Cycle"/>).
+    /// and the optimum cycle's full report (<see cref="CycleHtml.Cycle"/>). <paramref name="scanChart"/> false leaves the scan
+    /// chart out (for a page that draws its own), the cycle's diagrams still following <see cref="RenderOptions.Diagrams"/>.
     /// </summary>
-    public static string Optimum(OptimumResult optimum, RenderOptions? options = null, SweepFigure? figure = null)
+    public static string Optimum(OptimumResult optimum, RenderOptions? options = null, SweepFigure? figure = null, bool scanChart = true)
     {
         ArgumentNullException.ThrowIfNull(optimum);
         options ??= RenderOptions.Default;
@@ -80,7 +81,7 @@ public static class SweepHtml
         }
 
         h.Append("</tbody></table>");
-        if (options.Diagrams)
+        if (options.Diagrams && scanChart)
         {
             h.Append("<div class=\"nbc-diagrams nbc-sweepcharts\">").Append(SweepSvg.Scan(optimum, figure, options)).Append("</div>");
         }

@@ -217,16 +217,17 @@ public static class SweepSvg
     }
 }
 
-/// <summary>Names, units and values of the sweep figures.</summary>
-internal static class SweepFigures
+/// <summary>Names, display quantities and values of the sweep figures.</summary>
+public static class SweepFigures
 {
     /// <summary>The table's figures, in column order.</summary>
-    public static readonly SweepFigure[] TableOrder =
+    internal static readonly SweepFigure[] TableOrder =
     [
         SweepFigure.ThermalEfficiency, SweepFigure.CopCooling, SweepFigure.NetWork, SweepFigure.MeanEffectivePressure,
         SweepFigure.BackWorkRatio, SweepFigure.PeakTemperature, SweepFigure.PeakPressure,
     ];
 
+    /// <summary>The figure's SI value in <paramref name="f"/> (NaN where it does not apply).</summary>
     public static double Get(SweepFigure figure, FiguresOfMerit f) => figure switch
     {
         SweepFigure.ThermalEfficiency => f.ThermalEfficiency,
@@ -241,6 +242,7 @@ internal static class SweepFigures
         _ => throw new ArgumentOutOfRangeException(nameof(figure), figure, "Unknown sweep figure."),
     };
 
+    /// <summary>What the figure measures, for unit conversion (<see cref="UnitText.Convert"/>).</summary>
     public static DisplayQuantity Quantity(SweepFigure figure) => figure switch
     {
         SweepFigure.NetWork or SweepFigure.HeatIn or SweepFigure.ExergyDestroyed => DisplayQuantity.SpecificEnergy,
@@ -249,6 +251,7 @@ internal static class SweepFigures
         _ => DisplayQuantity.Dimensionless,
     };
 
+    /// <summary>The figure's name as shown ("Thermal efficiency").</summary>
     public static string Name(SweepFigure figure) => figure switch
     {
         SweepFigure.ThermalEfficiency => "Thermal efficiency",
@@ -264,7 +267,7 @@ internal static class SweepFigures
     };
 
     /// <summary>The table's figures that apply to the sweep.</summary>
-    public static List<SweepFigure> ForTable(SweepResult sweep)
+    internal static List<SweepFigure> ForTable(SweepResult sweep)
     {
         var list = new List<SweepFigure>(TableOrder.Length);
         foreach (var f in TableOrder)
@@ -279,5 +282,5 @@ internal static class SweepFigures
     }
 
     /// <summary>A parameter value as shown (six significant digits, invariant).</summary>
-    public static string Parameter(double v) => double.IsNaN(v) ? "—" : v.ToString("G6", CultureInfo.InvariantCulture);
+    internal static string Parameter(double v) => double.IsNaN(v) ? "—" : v.ToString("G6", CultureInfo.InvariantCulture);
 }
