@@ -182,9 +182,11 @@ public static class SweepSvg
         for (int c = 0; c < curves.Count; c++)
         {
             var (second, x, y) = curves[c];
-            string name = sweep.YName is null ? SweepFigures.Name(figure) : sweep.YName + " = " + second.ToString("G6", CultureInfo.InvariantCulture);
+            // Under the legend's title (the second parameter's name) each entry is the value alone.
+            string name = sweep.YName is null ? SweepFigures.Name(figure) : second.ToString("G6", CultureInfo.InvariantCulture);
+            string tooltip = sweep.YName is null ? name : sweep.YName + " = " + name;
             string attributes = sweep.YName is null ? "" : " data-second=\"" + second.ToString("R", CultureInfo.InvariantCulture) + "\"";
-            series.Add(new ChartSeries(name, c, [new ChartLine(x, y, " data-figure=\"" + figure + "\"" + attributes, name)], x.Length <= MarkerLimit));
+            series.Add(new ChartSeries(name, c, [new ChartLine(x, y, " data-figure=\"" + figure + "\"" + attributes, tooltip)], x.Length <= MarkerLimit));
         }
 
         int failed = 0;
