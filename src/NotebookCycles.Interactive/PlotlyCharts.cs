@@ -135,8 +135,11 @@ public static class PlotlyCharts
 
         foreach (var (second, x, y) in groups)
         {
+            string colour = Palette[traces.Count % Palette.Length];
             traces.Add(new Scatter
             {
+                line = new Line { color = colour, width = 2.0 },
+                marker = new Marker { color = colour, size = 6.0 },
                 x = x,
                 y = y,
                 name = sweep.YName is null ? Label(figure) : sweep.YName + " = " + second.ToString("G6", CultureInfo.InvariantCulture),
@@ -162,6 +165,9 @@ public static class PlotlyCharts
          .Append("</div>");
         return h.ToString();
     }
+
+    // The light-theme palette of the static diagrams, so a chart and its SVG fallback show the same colours.
+    private static readonly string[] Palette = ["#1f65a8", "#c2410c", "#2f7d32", "#be185d", "#7c3aed", "#0e7490"];
 
     private static object? Value(double v) => double.IsFinite(v) ? v : null;
 
