@@ -154,7 +154,14 @@ public static class PlotlyCharts
     {
         string id = "nbc-plot-" + Guid.NewGuid().ToString("N");
         chart.WithId(id);
-        string js = chart.GetInlineJS().Replace("<script>", "", StringComparison.Ordinal).Replace("</script>", "", StringComparison.Ordinal);
+        // The notebook's theme: transparent background, the text colour of the page, faint grid lines (as the SVG has).
+        const string Theme =
+            "var nbcColour=getComputedStyle(box).color;layout.paper_bgcolor='rgba(0,0,0,0)';layout.plot_bgcolor='rgba(0,0,0,0)';layout.font={color:nbcColour};" +
+            "['xaxis','yaxis'].forEach(function(a){layout[a]=layout[a]||{};layout[a].gridcolor='rgba(128,128,128,0.25)';layout[a].zerolinecolor='rgba(128,128,128,0.5)';});";
+        string js = ScriptBody(chart.GetInlineJS())
+            .Replace("Plotly.newPlot(", Theme + "Plotly.newPlot(", StringComparison.Ordinal)
+            // '<' occurs only inside the JSON's strings (titles, names): escaped, user text cannot close the script element.
+            .Replace("<", "\\u003c", StringComparison.Ordinal);
         var h = new StringBuilder(svg.Length + js.Length + 800);
         h.Append("<div class=\"nbc-plot\">")
          .Append("<div id=\"").Append(id).Append("\" class=\"nbc-plotly\" style=\"width:640px;height:380px;max-width:100%;display:none\"></div>")
@@ -168,6 +175,23 @@ public static class PlotlyCharts
 
     // The light-theme palette of the static diagrams, so a chart and its SVG fallback show the same colours.
     private static readonly string[] Palette = ["#1f65a8", "#c2410c", "#2f7d32", "#be185d", "#7c3aed", "#0e7490"];
+
+    /// <summary>The code inside the one script element XPlot writes (only its own opening and closing tags removed).</summary>
+    private static string ScriptBody(string element)
+    {
+        string js = element.Trim();
+        if (js.StartsWith("<script>", StringComparison.Ordinal))
+        {
+            js = js["<script>".Length..];
+        }
+
+        if (js.EndsWith("</script>", StringComparison.Ordinal))
+        {
+            js = js[..^"</script>".Length];
+        }
+
+        return js;
+    }
 
     private static object? Value(double v) => double.IsFinite(v) ? v : null;
 
