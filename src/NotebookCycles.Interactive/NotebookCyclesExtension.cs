@@ -73,7 +73,7 @@ public static class NotebookCyclesExtension
 
     /// <summary>The line shown after loading.</summary>
     internal static string LoadedMessage(bool namespacesAdded) =>
-        "<div class=\"nbc-loaded\" style=\"font-size:.92em\">NotebookCycles loaded: tables and T-s / p-v / h-s diagrams for states, cycles, steps, records (<code>cycle.Record()</code>) and comparisons (<code>CycleComparison.Of(a, b)</code>); " +
+        "<div class=\"nbc-loaded\" style=\"font-size:.92em\">NotebookCycles loaded: tables and T-s / p-v / h-s diagrams for states, cycles, steps, records (<code>cycle.Record()</code>), comparisons (<code>CycleComparison.Of(a, b)</code>), sweeps and optima (<code>Sweep.Over</code>, <code>NotebookSweep.Over</code> with progress, <code>Optimum.Maximize</code>); " +
         "display units <code>NotebookCyclesDisplay.Units = DisplayUnits.SiCelsiusBar</code>" + (namespacesAdded ? "; namespaces imported" : "") +
         ".<br>Try: <code>" + HtmlText.Encode(TryLine) + "</code></div>";
 }
