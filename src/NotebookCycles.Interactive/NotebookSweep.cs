@@ -11,7 +11,8 @@ namespace NotebookCycles.Interactive;
 /// <summary>
 /// Sweeps run from notebook code with progress shown in the cell: the same as <see cref="Sweep.Over(string, IReadOnlyList{double}, Func{double, CycleResult}, SweepOptions?, string?)"/>,
 /// plus a progress line that appears once the sweep has run about a second (<see cref="NotebookSweepProgress.DefaultDelay"/>)
-/// and updates in place until it is done. Outside a notebook submission no progress is shown.
+/// and updates in place until it is done. Outside a notebook submission no progress is shown. A
+/// <see cref="SweepOptions.Progress"/> given in the options is replaced by the notebook's.
 /// </summary>
 public static class NotebookSweep
 {

@@ -117,33 +117,24 @@ public static class PlotlyCharts
     {
         string unit = UnitText.Unit(Quantity(figure), units);
         yTitle = unit.Length == 0 ? Label(figure) : Label(figure) + ", " + unit;
-        var q = Quantity(figure);
         var traces = new List<Scatter>();
-        var groups = new List<(double Second, List<double> X, List<object?> Y)>();
-        foreach (var p in sweep.Points)
-        {
-            var g = groups.FindIndex(c => c.Second.Equals(p.Y));
-            if (g < 0)
-            {
-                groups.Add((p.Y, [], []));
-                g = groups.Count - 1;
-            }
-
-            groups[g].X.Add(p.X);
-            groups[g].Y.Add(p.Figures is { } fm ? Value(UnitText.Convert(GetFigure(figure, fm), q, units)) : null);
-        }
-
-        foreach (var (second, x, y) in groups)
+        foreach (var (second, x, y) in SweepSvg.Curves(sweep, figure, units))
         {
             string colour = Palette[traces.Count % Palette.Length];
+            var values = new object?[y.Length];
+            for (int i = 0; i < y.Length; i++)
+            {
+                values[i] = Value(y[i]);
+            }
+
             traces.Add(new Scatter
             {
                 line = new Line { color = colour, width = 2.0 },
                 marker = new Marker { color = colour, size = 6.0 },
                 x = x,
-                y = y,
+                y = values,
                 name = sweep.YName is null ? Label(figure) : sweep.YName + " = " + second.ToString("G6", CultureInfo.InvariantCulture),
-                mode = x.Count <= 60 ? "lines+markers" : "lines",
+                mode = x.Length <= 60 ? "lines+markers" : "lines",
             });
         }
 
@@ -196,8 +187,6 @@ public static class PlotlyCharts
     private static object? Value(double v) => double.IsFinite(v) ? v : null;
 
     private static double Get(SweepFigure f, Cycles.CycleResult cycle) => SweepFigures.Get(f, cycle.Figures);
-
-    private static double GetFigure(SweepFigure f, Cycles.FiguresOfMerit m) => SweepFigures.Get(f, m);
 
     private static DisplayQuantity Quantity(SweepFigure f) => SweepFigures.Quantity(f);
 

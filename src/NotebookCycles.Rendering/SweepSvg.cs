@@ -125,9 +125,13 @@ public static class SweepSvg
         return SweepFigure.ThermalEfficiency;
     }
 
-    /// <summary>The curves of a sweep in display units: (second-parameter value or NaN, x, y), in sweep order.</summary>
-    internal static List<(double Second, double[] X, double[] Y)> Curves(SweepResult sweep, SweepFigure figure, DisplayUnits units)
+    /// <summary>
+    /// The curves a chart of <paramref name="figure"/> draws, in display units: one for a one-parameter sweep (Second NaN),
+    /// one per value of the second parameter otherwise, in sweep order; a failed point's Y is NaN.
+    /// </summary>
+    public static IReadOnlyList<(double Second, double[] X, double[] Y)> Curves(SweepResult sweep, SweepFigure figure, DisplayUnits units)
     {
+        ArgumentNullException.ThrowIfNull(sweep);
         var q = SweepFigures.Quantity(figure);
         var curves = new List<(double Second, double[] X, double[] Y)>();
         if (sweep.YName is null)
@@ -145,11 +149,11 @@ public static class SweepSvg
             return curves;
         }
 
-        // The second parameter varies fastest: its values repeat in the same order for every first-parameter value.
+        // The second parameter varies fastest: the points sharing the first point's X hold every second-parameter value once.
         var seconds = new List<double>();
         foreach (var p in sweep.Points)
         {
-            if (seconds.Count > 0 && p.Y.Equals(seconds[0]))
+            if (!p.X.Equals(sweep.Points[0].X))
             {
                 break;
             }

@@ -102,4 +102,15 @@ public sealed class SweepSvgTests
     [Fact]
     public void The_chart_is_deterministic() =>
         Assert.Equal(SweepSvg.Chart(TestSweeps.BraytonOverRatioAndTemperature(), SweepFigure.ThermalEfficiency), SweepSvg.Chart(TestSweeps.BraytonOverRatioAndTemperature(), SweepFigure.ThermalEfficiency));
+
+    [Fact]
+    public void Curves_follow_the_grid_even_with_a_repeated_second_value()
+    {
+        var sweep = Sweep.Over("pressure ratio", [4.0, 8.0, 12.0], "turbine inlet temperature, K", [1300.0, 1300.0], TestSweeps.Brayton);
+        var curves = SweepSvg.Curves(sweep, SweepFigure.NetWork, DisplayUnits.Si);
+        Assert.Equal(2, curves.Count);
+        Assert.All(curves, c => Assert.Equal([4.0, 8.0, 12.0], c.X));
+        Assert.Equal(sweep.Points[2].Figures!.NetWork / 1000, curves[0].Y[1], 12);
+        Assert.True(double.IsNaN(SweepSvg.Curves(TestSweeps.BraytonOverPressureRatio(), SweepFigure.NetWork, DisplayUnits.Si)[0].Y[0]));
+    }
 }
