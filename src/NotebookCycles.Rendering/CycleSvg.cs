@@ -56,6 +56,69 @@ public static class CycleSvg
         return svg.ToString();
     }
 
+    /// <summary>
+    /// The variants of a comparison overlaid on one T-s (or h-s) diagram: one colour per variant with a legend, one path
+    /// element per step along its real path (<see cref="Step.SamplePath"/>), state markers, and the saturation dome of the
+    /// baseline's model when it has one. The p-v diagram is not overlaid (its logarithmic axes are drawn per cycle).
+    /// </summary>
+    public static string Overlay(CycleComparison comparison, DiagramKind kind = DiagramKind.TemperatureEntropy, RenderOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(comparison);
+        if (kind == DiagramKind.PressureVolume)
+        {
+            throw new ArgumentOutOfRangeException(nameof(kind), kind, "Overlaid diagrams are drawn for T-s and h-s only.");
+        }
+
+        options ??= RenderOptions.Default;
+        int count = options.CheckedPathPoints();
+        var axes = Axes.For(kind, options.Units);
+        var series = new List<ChartSeries>(comparison.Variants.Length);
+        for (int v = 0; v < comparison.Variants.Length; v++)
+        {
+            var (name, cycle) = comparison.Variants[v];
+            var lines = new List<ChartLine>(cycle.Steps.Length);
+            string variant = " data-variant=\"" + HtmlText.Encode(name) + "\"";
+            foreach (var step in cycle.Steps)
+            {
+                var points = step.SamplePath(count);
+                var x = new double[points.Count];
+                var y = new double[points.Count];
+                for (int i = 0; i < points.Count; i++)
+                {
+                    x[i] = axes.X(points[i]);
+                    y[i] = axes.Y(points[i]);
+                }
+
+                lines.Add(new ChartLine(x, y, variant + " data-step=\"" + HtmlText.Encode(step.Name) + "\"", name + ": " + step.Index.ToString(CultureInfo.InvariantCulture) + ". " + step.Name + " " + step.Process, step.Law == PathLaw.Undefined));
+            }
+
+            var sx = new double[cycle.States.Length];
+            var sy = new double[cycle.States.Length];
+            for (int i = 0; i < sx.Length; i++)
+            {
+                sx[i] = axes.X(cycle.States[i].Point);
+                sy[i] = axes.Y(cycle.States[i].Point);
+            }
+
+
+            series.Add(new ChartSeries(name, v, lines, true, sx, sy));
+        }
+
+        var svg = new StringBuilder(12_000);
+        LineChart.Write(svg, new ChartSpec
+        {
+            Slug = axes.Slug + " nbc-overlay",
+            Title = axes.Title + ": " + comparison.Title,
+            AriaLabel = axes.Title + ", overlaid: " + string.Join(", ", comparison.Names),
+            XLabel = axes.XLabel,
+            YLabel = axes.YLabel,
+            Series = series,
+            Legend = true,
+            Background = Dome(comparison.Variants[0].Cycle.Model, axes),
+        });
+        return svg.ToString();
+    }
+
     internal static void Write(StringBuilder svg, CycleResult cycle, DiagramKind kind, RenderOptions options)
     {
         var units = options.Units;
@@ -183,7 +246,7 @@ public static class CycleSvg
         svg.Append("</g></svg>");
     }
 
-    private static (double[] X, double[] Y)? Dome(IPropertyModel model, Axes axes)
+    internal static (double[] X, double[] Y)? Dome(IPropertyModel model, Axes axes)
     {
         if (model is not ISaturationModel sat)
         {
@@ -233,7 +296,7 @@ public static class CycleSvg
         return x.Count < 3 ? null : (x.ToArray(), y.ToArray());
     }
 
-    private static void AppendPath(StringBuilder svg, double[] x, double[] y, Scale sx, Scale sy)
+    internal static void AppendPath(StringBuilder svg, double[] x, double[] y, Scale sx, Scale sy)
     {
         for (int i = 0; i < x.Length; i++)
         {
@@ -243,7 +306,7 @@ public static class CycleSvg
 
     internal static string N(double v) => UnitText.Fixed(Math.Round(v, 1), 1);
 
-    private static string Tick(double v)
+    internal static string Tick(double v)
     {
         double m = Math.Abs(v);
         return m == 0 || (m >= 1e-4 && m < 1e7)
@@ -252,7 +315,7 @@ public static class CycleSvg
     }
 
     // Self-contained styles: palette from CSS variables (light, dark and print), text and axes in currentColor.
-    private const string Style =
+    internal const string Style =
         "<style>" +
         ".nbc-svg{--nbc-c0:#1f65a8;--nbc-c1:#c2410c;--nbc-c2:#2f7d32;--nbc-c3:#be185d;--nbc-c4:#7c3aed;--nbc-c5:#0e7490;--nbc-dome:#6b7280;overflow:visible}" +
         "@media (prefers-color-scheme:dark){.nbc-svg{--nbc-c0:#7cb8f2;--nbc-c1:#fb9a6a;--nbc-c2:#86d38a;--nbc-c3:#f9a8d4;--nbc-c4:#c4b5fd;--nbc-c5:#67d3e8;--nbc-dome:#a1a7b3}}" +
@@ -265,7 +328,7 @@ public static class CycleSvg
         "</style>";
 
     /// <summary>The quantities a diagram plots and their labels.</summary>
-    private sealed class Axes
+    internal sealed class Axes
     {
         private readonly DisplayQuantity _x, _y;
         private readonly Func<StatePoint, double> _xs, _ys;
@@ -312,7 +375,7 @@ public static class CycleSvg
     }
 
     /// <summary>A linear or logarithmic map from data to pixels, with round ticks.</summary>
-    private sealed class Scale
+    internal sealed class Scale
     {
         private readonly double _lo, _hi, _p0, _p1;
         private readonly bool _log;
