@@ -137,3 +137,34 @@ public sealed class CycleSvgTests
         Assert.Throws<ArgumentOutOfRangeException>(() => CycleSvg.Overlay(comparison, DiagramKind.PressureVolume));
     }
 }
+
+public sealed class PressureEnthalpyDiagramTests
+{
+    private static NotebookCycles.Cycles.CycleResult HeatPump() =>
+        NotebookCycles.Cycles.RefrigerationCycles.VapourCompression(NotebookCycles.Refrigerants.Refrigerant.R134a, UnitsNet.Temperature.FromDegreesCelsius(-5), UnitsNet.Temperature.FromDegreesCelsius(45));
+
+    [Fact]
+    public void A_refrigerant_cycle_gets_the_log_p_h_diagram_with_dome_and_isotherms()
+    {
+        var cycle = HeatPump();
+        Assert.Equal(DiagramKind.PressureEnthalpy, CycleSvg.DiagramsFor(cycle)[0]);
+        string svg = CycleSvg.PressureEnthalpy(cycle);
+        Assert.Contains("log p-h diagram", svg, StringComparison.Ordinal);
+        Assert.Contains("data-curve=\"saturation\"", svg, StringComparison.Ordinal);
+        Assert.True(System.Text.RegularExpressions.Regex.Matches(svg, "data-curve=\"isotherm\"").Count >= 3);
+        Assert.Equal(cycle.Steps.Length, System.Text.RegularExpressions.Regex.Matches(svg, "class=\"nbc-step ").Count);
+    }
+
+    [Fact]
+    public void The_evaporator_is_horizontal_on_the_log_p_h_diagram()
+    {
+        // A constant-pressure step is a horizontal line at log p: every y of its path is the same.
+        var cycle = HeatPump();
+        string svg = CycleSvg.PressureEnthalpy(cycle);
+        var evaporator = cycle.Steps[^1];
+        var m = System.Text.RegularExpressions.Regex.Match(svg, "data-step=\"" + System.Net.WebUtility.HtmlEncode(evaporator.Name).Replace("→", "(?:→|&#8594;)") + "\" d=\"([^\"]+)\"");
+        Assert.True(m.Success, svg[..Math.Min(400, svg.Length)]);
+        var ys = System.Text.RegularExpressions.Regex.Matches(m.Groups[1].Value, "[ML][0-9.]+ ([0-9.]+)").Select(x => x.Groups[1].Value).Distinct().ToList();
+        Assert.Single(ys);
+    }
+}
