@@ -4,12 +4,13 @@ using Microsoft.DotNet.Interactive.Formatting;
 using NotebookCycles.Cycles;
 using NotebookCycles.Properties;
 using NotebookCycles.Rendering;
+using NotebookCycles.Sweeps;
 
 namespace NotebookCycles.Interactive;
 
 /// <summary>
-/// The notebook extension: registers HTML and plain-text formatters for states, cycles, steps, calculation records
-/// and comparisons, adds the library's namespaces to the C# kernel, and says what it loaded. The package's
+/// The notebook extension: registers HTML and plain-text formatters for states, cycles, steps, calculation records,
+/// comparisons, sweeps and optima (interactive plotly charts with static SVG fallbacks), adds the library's namespaces to the C# kernel, and says what it loaded. The package's
 /// interactive-extensions/dotnet/extension.dib calls <see cref="Load"/>.
 /// </summary>
 public static class NotebookCyclesExtension
@@ -22,6 +23,7 @@ public static class NotebookCyclesExtension
         "NotebookCycles.Gases",
         "NotebookCycles.Properties",
         "NotebookCycles.Rendering",
+        "NotebookCycles.Sweeps",
         "NotebookCycles.Interactive",
         "NotebookCycles.Units.Literals",
         "UnitsNet",
@@ -60,15 +62,63 @@ public static class NotebookCyclesExtension
         Formatter.Register<CalculationRecord>((r, w) => w.Write(CycleHtml.Record(r, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
         Formatter.Register<CalculationRecord>((r, w) => w.Write(CycleText.Record(r, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
         Formatter.Register<CycleComparison>((c, w) => w.Write(CycleHtml.Comparison(c, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
+        Formatter.Register<SweepResult>((s, w) => w.Write(SweepDisplay.Html(s, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
+        Formatter.Register<SweepResult>((s, w) => w.Write(SweepText.Sweep(s, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
+        Formatter.Register<OptimumResult>((o, w) => w.Write(SweepDisplay.Html(o, NotebookCyclesDisplay.Options)), HtmlFormatter.MimeType);
+        Formatter.Register<OptimumResult>((o, w) => w.Write(SweepText.Optimum(o, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
+        Formatter.Register<SweepProgressView>((p, w) => w.Write(p.ToHtml()), HtmlFormatter.MimeType);
+        Formatter.Register<SweepProgressView>((p, w) => w.Write(p.ToString()), PlainTextFormatter.MimeType);
         Formatter.Register<CycleComparison>((c, w) => w.Write(CycleText.Comparison(c, NotebookCyclesDisplay.Options)), PlainTextFormatter.MimeType);
-        SweepFormatters.Register();
     }
 
     /// <summary>The line shown after loading.</summary>
     internal static string LoadedMessage(bool namespacesAdded) =>
-        "<div class=\"nbc-loaded\" style=\"font-size:.92em\">NotebookCycles loaded: tables and T-s / p-v / h-s diagrams for states, cycles, steps, records (<code>cycle.Record()</code>) and comparisons (<code>CycleComparison.Of(a, b)</code>); " +
+        "<div class=\"nbc-loaded\" style=\"font-size:.92em\">NotebookCycles loaded: tables and T-s / p-v / h-s diagrams for states, cycles, steps, records (<code>cycle.Record()</code>), comparisons (<code>CycleComparison.Of(a, b)</code>), sweeps and optima (<code>Sweep.Over</code>, <code>NotebookSweep.Over</code> with progress, <code>Optimum.Maximize</code>); " +
         "display units <code>NotebookCyclesDisplay.Units = DisplayUnits.SiCelsiusBar</code>" + (namespacesAdded ? "; namespaces imported" : "") +
         ".<br>Try: <code>" + HtmlText.Encode(TryLine) + "</code></div>";
+}
+
+/// <summary>
+/// The HTML a notebook shows for sweeps and optima: the static fragment of <see cref="SweepHtml"/> with each chart
+/// made interactive (<see cref="PlotlyCharts"/>, its SVG kept as the fallback), plotly.js included once per kernel session.
+/// </summary>
+public static class SweepDisplay
+{
+    /// <summary>A sweep: interactive charts of the default figures (<see cref="SweepSvg.DefaultFigures"/>) and the table.</summary>
+    public static string Html(SweepResult sweep, RenderOptions? options = null, IReadOnlyList<SweepFigure>? figures = null)
+    {
+        ArgumentNullException.ThrowIfNull(sweep);
+        options ??= RenderOptions.Default;
+        var h = new System.Text.StringBuilder(24_000);
+        h.Append("<div class=\"nbc-interactive\">").Append(PlotlyScript.ForCurrentSession());
+        if (options.Diagrams)
+        {
+            h.Append("<div class=\"nbc-plots\" style=\"display:flex;flex-wrap:wrap;gap:10px\">");
+            foreach (var f in figures ?? SweepSvg.DefaultFigures(sweep))
+            {
+                h.Append(PlotlyCharts.Sweep(sweep, f, options));
+            }
+
+            h.Append("</div>");
+        }
+
+        return h.Append(SweepHtml.Table(sweep, options)).Append("</div>").ToString();
+    }
+
+    /// <summary>An optimum: its summary and cycle report (<see cref="SweepHtml.Optimum"/>) with the scan chart made interactive.</summary>
+    public static string Html(OptimumResult optimum, RenderOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(optimum);
+        options ??= RenderOptions.Default;
+        var h = new System.Text.StringBuilder(60_000);
+        h.Append("<div class=\"nbc-interactive\">").Append(PlotlyScript.ForCurrentSession());
+        if (options.Diagrams)
+        {
+            h.Append(PlotlyCharts.Optimum(optimum, null, options));
+        }
+
+        return h.Append(SweepHtml.Optimum(optimum, options, null, scanChart: false)).Append("</div>").ToString();
+    }
 }
 
 /// <summary>The display settings notebooks use; changing them changes only how numbers are shown.</summary>

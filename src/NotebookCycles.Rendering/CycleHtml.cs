@@ -104,7 +104,7 @@ public static class CycleHtml
         return Close(h);
     }
 
-    /// <summary>Cycles side by side: a figures table with each cycle's difference from the first.</summary>
+    /// <summary>Cycles side by side: a figures table with each cycle's difference from the first, and (with diagrams on) their T-s diagrams overlaid, one colour per variant.</summary>
     public static string Comparison(CycleComparison comparison, RenderOptions? options = null)
     {
         ArgumentNullException.ThrowIfNull(comparison);
@@ -159,6 +159,11 @@ public static class CycleHtml
         }
 
         h.Append("</tbody></table>");
+        if ((options ?? RenderOptions.Default).Diagrams)
+        {
+            h.Append("<div class=\"nbc-diagrams\">").Append(CycleSvg.Overlay(comparison, DiagramKind.TemperatureEntropy, options)).Append("</div>");
+        }
+
         h.Append("<p class=\"nbc-meta\">");
         for (int c = 0; c < cycles.Length; c++)
         {
@@ -368,9 +373,9 @@ public static class CycleHtml
 
     private static string Capital(string text) => text.Length == 0 ? text : char.ToUpperInvariant(text[0]) + text[1..];
 
-    private static void Open(StringBuilder h, string kind) => h.Append("<div class=\"nbc ").Append(kind).Append("\">").Append(Style);
+    internal static void Open(StringBuilder h, string kind) => h.Append("<div class=\"nbc ").Append(kind).Append("\">").Append(Style);
 
-    private static string Close(StringBuilder h) => h.Append("</div>").ToString();
+    internal static string Close(StringBuilder h) => h.Append("</div>").ToString();
 
     private const string Style =
         "<style>" +

@@ -16,6 +16,9 @@ public enum DiagramKind
 
     /// <summary>Specific enthalpy over specific entropy (linear axes), for models with a saturation dome.</summary>
     EnthalpyEntropy,
+
+    /// <summary>Pressure (logarithmic) over specific enthalpy, with the dome and isotherms: the refrigeration engineer's diagram.</summary>
+    PressureEnthalpy,
 }
 
 /// <summary>
@@ -32,9 +35,12 @@ public static class CycleSvg
     public static IReadOnlyList<DiagramKind> DiagramsFor(CycleResult cycle)
     {
         ArgumentNullException.ThrowIfNull(cycle);
-        return cycle.Model is ISaturationModel
-            ? [DiagramKind.TemperatureEntropy, DiagramKind.EnthalpyEntropy, DiagramKind.PressureVolume]
-            : [DiagramKind.TemperatureEntropy, DiagramKind.PressureVolume];
+        return cycle.Model switch
+        {
+            NotebookCycles.Refrigerants.Refrigerant => [DiagramKind.PressureEnthalpy, DiagramKind.TemperatureEntropy],
+            ISaturationModel => [DiagramKind.TemperatureEntropy, DiagramKind.EnthalpyEntropy, DiagramKind.PressureVolume],
+            _ => [DiagramKind.TemperatureEntropy, DiagramKind.PressureVolume],
+        };
     }
 
     /// <summary>The T-s diagram (with the saturation dome for models that have one).</summary>
@@ -42,6 +48,9 @@ public static class CycleSvg
 
     /// <summary>The p-v diagram, log p over log v.</summary>
     public static string PressureVolume(CycleResult cycle, RenderOptions? options = null) => Diagram(cycle, DiagramKind.PressureVolume, options);
+
+    /// <summary>The log p-h diagram with the saturation dome and isotherms.</summary>
+    public static string PressureEnthalpy(CycleResult cycle, RenderOptions? options = null) => Diagram(cycle, DiagramKind.PressureEnthalpy, options);
 
     /// <summary>The h-s diagram (with the saturation dome for models that have one).</summary>
     public static string EnthalpyEntropy(CycleResult cycle, RenderOptions? options = null) => Diagram(cycle, DiagramKind.EnthalpyEntropy, options);
@@ -53,6 +62,69 @@ public static class CycleSvg
         options ??= RenderOptions.Default;
         var svg = new StringBuilder(6000);
         Write(svg, cycle, kind, options);
+        return svg.ToString();
+    }
+
+    /// <summary>
+    /// The variants of a comparison overlaid on one T-s (or h-s) diagram: one colour per variant with a legend, one path
+    /// element per step along its real path (<see cref="Step.SamplePath"/>), state markers, and the saturation dome of the
+    /// baseline's model when it has one. The p-v diagram is not overlaid (its logarithmic axes are drawn per cycle).
+    /// </summary>
+    public static string Overlay(CycleComparison comparison, DiagramKind kind = DiagramKind.TemperatureEntropy, RenderOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(comparison);
+        if (kind is DiagramKind.PressureVolume or DiagramKind.PressureEnthalpy)
+        {
+            throw new ArgumentOutOfRangeException(nameof(kind), kind, "Overlaid diagrams are drawn for T-s and h-s only.");
+        }
+
+        options ??= RenderOptions.Default;
+        int count = options.CheckedPathPoints();
+        var axes = Axes.For(kind, options.Units);
+        var series = new List<ChartSeries>(comparison.Variants.Length);
+        for (int v = 0; v < comparison.Variants.Length; v++)
+        {
+            var (name, cycle) = comparison.Variants[v];
+            var lines = new List<ChartLine>(cycle.Steps.Length);
+            string variant = " data-variant=\"" + HtmlText.Encode(name) + "\"";
+            foreach (var step in cycle.Steps)
+            {
+                var points = step.SamplePath(count);
+                var x = new double[points.Count];
+                var y = new double[points.Count];
+                for (int i = 0; i < points.Count; i++)
+                {
+                    x[i] = axes.X(points[i]);
+                    y[i] = axes.Y(points[i]);
+                }
+
+                lines.Add(new ChartLine(x, y, variant + " data-step=\"" + HtmlText.Encode(step.Name) + "\"", name + ": " + step.Index.ToString(CultureInfo.InvariantCulture) + ". " + step.Name + " " + step.Process, step.Law == PathLaw.Undefined));
+            }
+
+            var sx = new double[cycle.States.Length];
+            var sy = new double[cycle.States.Length];
+            for (int i = 0; i < sx.Length; i++)
+            {
+                sx[i] = axes.X(cycle.States[i].Point);
+                sy[i] = axes.Y(cycle.States[i].Point);
+            }
+
+
+            series.Add(new ChartSeries(name, v, lines, true, sx, sy));
+        }
+
+        var svg = new StringBuilder(12_000);
+        LineChart.Write(svg, new ChartSpec
+        {
+            Slug = axes.Slug + " nbc-overlay",
+            Title = axes.Title + ": " + comparison.Title,
+            AriaLabel = axes.Title + ", overlaid: " + string.Join(", ", comparison.Names),
+            XLabel = axes.XLabel,
+            YLabel = axes.YLabel,
+            Series = series,
+            Legend = true,
+            Background = Dome(comparison.Variants[0].Cycle.Model, axes),
+        });
         return svg.ToString();
     }
 
@@ -90,10 +162,41 @@ public static class CycleSvg
 
         // The saturation dome: liquid line up to the critical point and back down the vapour line.
         (double[] X, double[] Y)? dome = kind == DiagramKind.PressureVolume ? null : Dome(cycle.Model, axes);
+        if (kind == DiagramKind.PressureEnthalpy && dome is { } full)
+        {
+            // On log p the dome runs down to the triple point; draw only the part near the cycle's pressures.
+            double floor = double.MaxValue;
+            foreach (var st in cycle.States)
+            {
+                floor = Math.Min(floor, axes.Y(st.Point));
+            }
+
+            floor /= 3;
+            var keepX = new List<double>(full.X.Length);
+            var keepY = new List<double>(full.Y.Length);
+            for (int i = 0; i < full.X.Length; i++)
+            {
+                if (full.Y[i] >= floor)
+                {
+                    keepX.Add(full.X[i]);
+                    keepY.Add(full.Y[i]);
+                }
+            }
+
+            dome = keepX.Count >= 3 ? ([.. keepX], [.. keepY]) : null;
+        }
+
         if (dome is { } d)
         {
             xs.AddRange(d.X);
             ys.AddRange(d.Y);
+        }
+
+        var isotherms = kind == DiagramKind.PressureEnthalpy ? Isotherms(cycle, axes) : [];
+        foreach (var (_, _, ix, iy) in isotherms)
+        {
+            xs.AddRange(ix);
+            ys.AddRange(iy);
         }
 
         var sx = Scale.Fit(xs, axes.LogX, Left, Width - Right);
@@ -140,6 +243,13 @@ public static class CycleSvg
             svg.Append("\"/>");
         }
 
+        foreach (var (label, labelAt, ix, iy) in isotherms)
+        {
+            svg.Append("<path class=\"nbc-iso\" data-curve=\"isotherm\" fill=\"none\" stroke=\"currentColor\" stroke-opacity=\"0.35\" stroke-dasharray=\"2 3\" d=\"");
+            AppendPath(svg, ix, iy, sx, sy);
+            svg.Append("\"/><text class=\"nbc-isolbl\" fill=\"currentColor\" fill-opacity=\"0.6\" font-size=\"9\" x=\"").Append(N(sx.Map(ix[labelAt]) + 3)).Append("\" y=\"").Append(N(sy.Map(iy[labelAt]) - 3)).Append("\">").Append(HtmlText.Encode(label)).Append("</text>");
+        }
+
         // One path element per step.
         svg.Append("<g class=\"nbc-paths\" fill=\"none\">");
         for (int i = 0; i < paths.Count; i++)
@@ -183,7 +293,84 @@ public static class CycleSvg
         svg.Append("</g></svg>");
     }
 
-    private static (double[] X, double[] Y)? Dome(IPropertyModel model, Axes axes)
+    /// <summary>
+    /// A few isotherms across the cycle's temperature span for the p-h diagram: compressed liquid down to saturation,
+    /// across the dome at constant pressure, then vapour down to the lowest pressure drawn.
+    /// </summary>
+    private static List<(string Label, int LabelAt, double[] X, double[] Y)> Isotherms(CycleResult cycle, Axes axes)
+    {
+        var curves = new List<(string, int, double[], double[])>();
+        if (cycle.Model is not ISaturationModel sat)
+        {
+            return curves;
+        }
+
+        double tLo = double.MaxValue, tHi = 0, pLo = double.MaxValue, pHi = 0;
+        foreach (var st in cycle.States)
+        {
+            tLo = Math.Min(tLo, st.Point.T);
+            tHi = Math.Max(tHi, st.Point.T);
+            pLo = Math.Min(pLo, st.Point.P);
+            pHi = Math.Max(pHi, st.Point.P);
+        }
+
+        pLo /= 1.4;
+        pHi *= 1.4;
+        double step = Math.Max(10, Math.Ceiling((tHi - tLo) / 4 / 10) * 10);
+        for (double t = Math.Ceiling(tLo / step) * step; t <= tHi + 1e-9; t += step)
+        {
+            var x = new List<double>(40);
+            var y = new List<double>(40);
+            int labelAt = -1;
+            void Add(StatePoint p)
+            {
+                x.Add(axes.X(p));
+                y.Add(axes.Y(p));
+            }
+
+            try
+            {
+                bool subcritical = t < sat.CriticalPoint.T;
+                double ps = subcritical ? sat.SaturationPressure(t) : double.NaN;
+                const int n = 14;
+                bool crossed = false;
+                for (int i = 0; i <= n; i++)
+                {
+                    double p = pHi * Math.Pow(pLo / pHi, (double)i / n);
+                    if (subcritical && !crossed && p < ps)
+                    {
+                        crossed = true;
+                        if (ps <= pHi)
+                        {
+                            Add(sat.FromTX(t, 0));
+                            Add(sat.FromTX(t, 1));
+                            labelAt = x.Count - 1;
+                        }
+                    }
+
+                    if (subcritical && Math.Abs(p - ps) < 1e-6 * ps)
+                    {
+                        continue;
+                    }
+
+                    Add(cycle.Model.FromTP(t, p));
+                }
+            }
+            catch (PropertyModelException)
+            {
+                // An isotherm that leaves the model's range is drawn only as far as it is valid.
+            }
+
+            if (x.Count >= 2)
+            {
+                curves.Add((UnitText.Number(t, DisplayQuantity.Temperature, axes.Units) + " " + UnitText.Unit(DisplayQuantity.Temperature, axes.Units), labelAt >= 0 ? labelAt : x.Count - 1, [.. x], [.. y]));
+            }
+        }
+
+        return curves;
+    }
+
+    internal static (double[] X, double[] Y)? Dome(IPropertyModel model, Axes axes)
     {
         if (model is not ISaturationModel sat)
         {
@@ -233,7 +420,7 @@ public static class CycleSvg
         return x.Count < 3 ? null : (x.ToArray(), y.ToArray());
     }
 
-    private static void AppendPath(StringBuilder svg, double[] x, double[] y, Scale sx, Scale sy)
+    internal static void AppendPath(StringBuilder svg, double[] x, double[] y, Scale sx, Scale sy)
     {
         for (int i = 0; i < x.Length; i++)
         {
@@ -243,7 +430,7 @@ public static class CycleSvg
 
     internal static string N(double v) => UnitText.Fixed(Math.Round(v, 1), 1);
 
-    private static string Tick(double v)
+    internal static string Tick(double v)
     {
         double m = Math.Abs(v);
         return m == 0 || (m >= 1e-4 && m < 1e7)
@@ -252,7 +439,7 @@ public static class CycleSvg
     }
 
     // Self-contained styles: palette from CSS variables (light, dark and print), text and axes in currentColor.
-    private const string Style =
+    internal const string Style =
         "<style>" +
         ".nbc-svg{--nbc-c0:#1f65a8;--nbc-c1:#c2410c;--nbc-c2:#2f7d32;--nbc-c3:#be185d;--nbc-c4:#7c3aed;--nbc-c5:#0e7490;--nbc-dome:#6b7280;overflow:visible}" +
         "@media (prefers-color-scheme:dark){.nbc-svg{--nbc-c0:#7cb8f2;--nbc-c1:#fb9a6a;--nbc-c2:#86d38a;--nbc-c3:#f9a8d4;--nbc-c4:#c4b5fd;--nbc-c5:#67d3e8;--nbc-dome:#a1a7b3}}" +
@@ -265,11 +452,13 @@ public static class CycleSvg
         "</style>";
 
     /// <summary>The quantities a diagram plots and their labels.</summary>
-    private sealed class Axes
+    internal sealed class Axes
     {
         private readonly DisplayQuantity _x, _y;
         private readonly Func<StatePoint, double> _xs, _ys;
         private readonly DisplayUnits _units;
+
+        public DisplayUnits Units => _units;
 
         private Axes(string title, string slug, DisplayQuantity x, Func<StatePoint, double> xs, DisplayQuantity y, Func<StatePoint, double> ys, bool logX, bool logY, string xSymbol, string ySymbol, DisplayUnits units)
         {
@@ -306,13 +495,14 @@ public static class CycleSvg
         {
             DiagramKind.TemperatureEntropy => new("T-s diagram", "ts", DisplayQuantity.SpecificEntropy, static p => p.S, DisplayQuantity.Temperature, static p => p.T, false, false, "s", "T", units),
             DiagramKind.EnthalpyEntropy => new("h-s diagram", "hs", DisplayQuantity.SpecificEntropy, static p => p.S, DisplayQuantity.SpecificEnergy, static p => p.H, false, false, "s", "h", units),
+            DiagramKind.PressureEnthalpy => new("log p-h diagram", "ph", DisplayQuantity.SpecificEnergy, static p => p.H, DisplayQuantity.Pressure, static p => p.P, false, true, "h", "p", units),
             DiagramKind.PressureVolume => new("p-v diagram", "pv", DisplayQuantity.SpecificVolume, static p => p.V, DisplayQuantity.Pressure, static p => p.P, true, true, "v", "p", units),
             _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown diagram."),
         };
     }
 
     /// <summary>A linear or logarithmic map from data to pixels, with round ticks.</summary>
-    private sealed class Scale
+    internal sealed class Scale
     {
         private readonly double _lo, _hi, _p0, _p1;
         private readonly bool _log;

@@ -361,7 +361,7 @@ internal static class TextReport
         t.AppendLine();
     }
 
-    private static void Heading(StringBuilder t, int level, string text, bool markdown)
+    internal static void Heading(StringBuilder t, int level, string text, bool markdown)
     {
         if (markdown)
         {

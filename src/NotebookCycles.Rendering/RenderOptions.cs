@@ -6,7 +6,7 @@ namespace NotebookCycles.Rendering;
 /// <summary>How a result is rendered: the display units, whether diagrams are drawn, and how finely paths are sampled.</summary>
 public sealed record RenderOptions
 {
-    /// <summary>SI units, diagrams on, 24 points per path.</summary>
+    /// <summary>SI units, diagrams on, 24 points per path, 40 sweep table rows.</summary>
     public static RenderOptions Default { get; } = new();
 
     /// <summary>The unit system of every displayed number (default SI).</summary>
@@ -17,6 +17,9 @@ public sealed record RenderOptions
 
     /// <summary>Points per process path on diagrams, both ends included, 2 to 200 (default 24).</summary>
     public int PathPoints { get; init; } = 24;
+
+    /// <summary>Rows a sweep table shows at most, 4 to 10,000 (default 40): larger sweeps show their first and last rows with a note between; charts always use every point.</summary>
+    public int TableRows { get; init; } = 40;
 
     /// <summary>These options with other units.</summary>
     public RenderOptions With(DisplayUnits units) => this with { Units = units };
@@ -29,6 +32,16 @@ public sealed record RenderOptions
         }
 
         return PathPoints;
+    }
+
+    internal int CheckedTableRows()
+    {
+        if (TableRows is < 4 or > 10_000)
+        {
+            throw new ArgumentOutOfRangeException(nameof(TableRows), TableRows, "Rows per sweep table must lie in 4 to 10,000.");
+        }
+
+        return TableRows;
     }
 }
 

@@ -2,7 +2,7 @@ using Xunit;
 
 namespace NotebookCycles.Rendering.Tests;
 
-/// <summary>Snapshots of the HTML and SVG of three representative cycles (see <see cref="Approvals"/>).</summary>
+/// <summary>Snapshots of the HTML and SVG of three representative cycles, a sweep chart and a comparison (see <see cref="Approvals"/>).</summary>
 public sealed class ApprovedOutputTests
 {
     [Fact]
@@ -24,4 +24,12 @@ public sealed class ApprovedOutputTests
 
     [Fact]
     public void Saturation_model_h_s_svg() => Approvals.Verify("saturation-dome-hs", "svg", CycleSvg.EnthalpyEntropy(TestCycles.OnSaturationModel()));
+
+    [Fact]
+    public void Two_parameter_sweep_chart_svg() =>
+        Approvals.Verify("brayton-sweep-net-work", "svg", SweepSvg.Chart(TestSweeps.BraytonOverRatioAndTemperature(), SweepFigure.NetWork));
+
+    [Fact]
+    public void Comparison_html_with_overlaid_T_s() =>
+        Approvals.Verify("brayton-variants", "html", CycleHtml.Comparison(TestSweeps.BraytonVariants()));
 }

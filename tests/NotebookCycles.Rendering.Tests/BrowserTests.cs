@@ -35,6 +35,29 @@ public sealed class BrowserTests
         }
     }
 
+    [ChromiumFact]
+    public void A_sweep_chart_draws_offline_in_a_headless_browser()
+    {
+        Directory.CreateDirectory(ArtifactFolder);
+        var sweep = TestSweeps.BraytonOverRatioAndTemperature();
+        var comparison = TestSweeps.BraytonVariants();
+        string fragment = SweepHtml.Sweep(sweep, null, [SweepFigure.NetWork, SweepFigure.ThermalEfficiency]) + CycleHtml.Comparison(comparison);
+        string page = Page(Path.Combine(ArtifactFolder, "sweep-light.html"), fragment, dark: false);
+
+        string dom = Browser.Run(new Uri(page).AbsoluteUri, "--dump-dom");
+        Assert.Equal(3, Regex.Matches(dom, "<svg ").Count);
+        Assert.Equal(3, Regex.Matches(dom, "data-figure=\"NetWork\"").Count);
+        Assert.Equal(sweep.Points.Length, Regex.Matches(dom, "<tr data-point=").Count);
+        Assert.Equal(comparison.Cycles.Sum(c => c.Steps.Length), Regex.Matches(dom, "data-variant=").Count);
+
+        string shot = Path.Combine(ArtifactFolder, "sweep-light.png");
+        File.Delete(shot);
+        Browser.Run(new Uri(page).AbsoluteUri, "--window-size=1200,1500", "--hide-scrollbars", "--screenshot=" + shot);
+        var bytes = File.ReadAllBytes(shot);
+        Assert.True(bytes.Length > 30_000, $"the screenshot {shot} is {bytes.Length} bytes: nearly empty");
+        Assert.Equal(new byte[] { 0x89, 0x50, 0x4E, 0x47 }, bytes[..4]);
+    }
+
     [Theory]
     [InlineData(null, null, true)]
     [InlineData(null, "false", true)]

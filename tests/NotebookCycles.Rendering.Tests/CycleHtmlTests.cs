@@ -138,4 +138,17 @@ public sealed class CycleHtmlTests
 
         return n;
     }
+
+    [Fact]
+    public void A_comparison_has_its_figures_table_and_the_overlaid_T_s_diagram_unless_diagrams_are_off()
+    {
+        var comparison = TestSweeps.BraytonVariants();
+        string html = CycleHtml.Comparison(comparison);
+        Assert.Contains("<table class=\"nbc-table nbc-figures\">", html, StringComparison.Ordinal);
+        Assert.Single(Regex.Matches(html, "<svg "));
+        Assert.Contains("nbc-ts nbc-overlay", html, StringComparison.Ordinal);
+        int paths = comparison.Cycles.Sum(c => c.Steps.Length);
+        Assert.Equal(paths, Regex.Matches(html, "data-variant=").Count);
+        Assert.DoesNotContain("<svg ", CycleHtml.Comparison(comparison, new RenderOptions { Diagrams = false }), StringComparison.Ordinal);
+    }
 }

@@ -99,4 +99,72 @@ public sealed class CycleSvgTests
             .Select(m => (double.Parse(m.Groups[1].Value, CultureInfo.InvariantCulture), double.Parse(m.Groups[2].Value, CultureInfo.InvariantCulture)))
             .ToList();
     }
+
+    [Fact]
+    public void The_overlay_has_one_path_per_step_per_variant_in_the_variant_colour()
+    {
+        var comparison = TestSweeps.BraytonVariants();
+        string svg = CycleSvg.Overlay(comparison);
+        for (int v = 0; v < comparison.Variants.Length; v++)
+        {
+            var (name, cycle) = comparison.Variants[v];
+            string encoded = HtmlText.Encode(name);
+            foreach (var step in cycle.Steps)
+            {
+                var path = Regex.Matches(svg, $"<path class=\"nbc-curve nbc-c{v}[^\"]*\" data-variant=\"{Regex.Escape(encoded)}\" data-step=\"{Regex.Escape(step.Name)}\" d=\"([^\"]*)\"");
+                Assert.Single(path);
+                int vertices = Regex.Matches(path[0].Groups[1].Value, "[ML]").Count;
+                Assert.Equal(step.SamplePath(RenderOptions.Default.PathPoints).Count, vertices);
+            }
+
+            Assert.Equal(cycle.Steps.Length, Regex.Matches(svg, $"data-variant=\"{Regex.Escape(encoded)}\"").Count);
+            Assert.Contains(">" + encoded + "</text>", svg, StringComparison.Ordinal);
+        }
+
+        Assert.Contains("losses &lt;85 % &amp; 88 %&gt;", svg, StringComparison.Ordinal);
+        Assert.Contains(">s, kJ/(kg·K)</text>", svg, StringComparison.Ordinal);
+        Assert.Contains(">T, K</text>", svg, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void The_overlay_follows_the_display_units_and_draws_the_dome_of_a_saturation_model()
+    {
+        var comparison = TestSweeps.BraytonVariants();
+        Assert.Contains(">T, °F</text>", CycleSvg.Overlay(comparison, options: new RenderOptions { Units = DisplayUnits.UsCustomary }), StringComparison.Ordinal);
+        Assert.DoesNotContain("data-curve=\"saturation\"", CycleSvg.Overlay(comparison), StringComparison.Ordinal);
+        var wet = NotebookCycles.Cycles.CycleComparison.Of(TestCycles.OnSaturationModel(), TestCycles.OnSaturationModel());
+        Assert.Contains("data-curve=\"saturation\"", CycleSvg.Overlay(wet, DiagramKind.EnthalpyEntropy), StringComparison.Ordinal);
+        Assert.Throws<ArgumentOutOfRangeException>(() => CycleSvg.Overlay(comparison, DiagramKind.PressureVolume));
+    }
+}
+
+public sealed class PressureEnthalpyDiagramTests
+{
+    private static NotebookCycles.Cycles.CycleResult HeatPump() =>
+        NotebookCycles.Cycles.RefrigerationCycles.VapourCompression(NotebookCycles.Refrigerants.Refrigerant.R134a, UnitsNet.Temperature.FromDegreesCelsius(-5), UnitsNet.Temperature.FromDegreesCelsius(45));
+
+    [Fact]
+    public void A_refrigerant_cycle_gets_the_log_p_h_diagram_with_dome_and_isotherms()
+    {
+        var cycle = HeatPump();
+        Assert.Equal(DiagramKind.PressureEnthalpy, CycleSvg.DiagramsFor(cycle)[0]);
+        string svg = CycleSvg.PressureEnthalpy(cycle);
+        Assert.Contains("log p-h diagram", svg, StringComparison.Ordinal);
+        Assert.Contains("data-curve=\"saturation\"", svg, StringComparison.Ordinal);
+        Assert.True(System.Text.RegularExpressions.Regex.Matches(svg, "data-curve=\"isotherm\"").Count >= 3);
+        Assert.Equal(cycle.Steps.Length, System.Text.RegularExpressions.Regex.Matches(svg, "class=\"nbc-step ").Count);
+    }
+
+    [Fact]
+    public void The_evaporator_is_horizontal_on_the_log_p_h_diagram()
+    {
+        // A constant-pressure step is a horizontal line at log p: every y of its path is the same.
+        var cycle = HeatPump();
+        string svg = CycleSvg.PressureEnthalpy(cycle);
+        var evaporator = cycle.Steps[^1];
+        var m = System.Text.RegularExpressions.Regex.Match(svg, "data-step=\"" + System.Net.WebUtility.HtmlEncode(evaporator.Name).Replace("→", "(?:→|&#8594;)") + "\" d=\"([^\"]+)\"");
+        Assert.True(m.Success, svg[..Math.Min(400, svg.Length)]);
+        var ys = System.Text.RegularExpressions.Regex.Matches(m.Groups[1].Value, "[ML][0-9.]+ ([0-9.]+)").Select(x => x.Groups[1].Value).Distinct().ToList();
+        Assert.Single(ys);
+    }
 }

@@ -1,6 +1,7 @@
 using NotebookCycles.Cycles;
 using NotebookCycles.Gases;
 using NotebookCycles.Properties;
+using NotebookCycles.Sweeps;
 using NotebookCycles.Units.Literals;
 
 namespace NotebookCycles.Rendering.Tests;
@@ -80,4 +81,33 @@ internal sealed class TwoPhaseTestFluid : ISaturationModel
         double h = hf + x * hfg, v = vf + x * (vg - vf);
         return new StatePoint(t, p, v, h - p * v, h, sf + x * hfg / t, double.NaN, double.NaN, double.NaN, x, Phase.TwoPhase);
     }
+}
+
+/// <summary>The sweeps, optima and comparisons the rendering tests draw. Design-study inputs, not reference data.</summary>
+internal static class TestSweeps
+{
+    /// <summary>Brayton efficiency over the pressure ratio at 1300 K turbine inlet; the first point (ratio 1) fails.</summary>
+    public static SweepResult BraytonOverPressureRatio(string parameter = "pressure ratio") =>
+        Sweep.Over(parameter, [1, 2, 4, 8, 12, 16, 24], rp => Brayton(rp, 1300), title: "Brayton cycle over the pressure ratio");
+
+    /// <summary>Pressure ratio × turbine inlet temperature: three curves.</summary>
+    public static SweepResult BraytonOverRatioAndTemperature() =>
+        Sweep.Over("pressure ratio", ParameterRange.Linear(2, 20, 10), "turbine inlet temperature, K", [1100, 1300, 1500], Brayton, title: "Brayton cycle, two parameters");
+
+    /// <summary>Otto cycles over 200 compression ratios (a large sweep: the table shows a subset).</summary>
+    public static SweepResult OttoOverManyRatios() =>
+        Sweep.Over("compression ratio", ParameterRange.Linear(4, 16, 200), r => AirStandardCycles.Otto(ColdAirStandard.Air, 300.Kelvins(), 100.Kilopascals(), r, heatAdded: 1800.KilojoulesPerKilogram()));
+
+    /// <summary>The Brayton pressure ratio of greatest net work at 1300 K, between 2 and 30.</summary>
+    public static OptimumResult BraytonBestNetWork() => Optimum.MaximumNetWork("pressure ratio", 2, 30, rp => Brayton(rp, 1300), relativeTolerance: 1e-6);
+
+    /// <summary>Three named variants: an ideal Brayton, one with component losses and one with a regenerator.</summary>
+    public static CycleComparison BraytonVariants() => CycleComparison.Of(
+        "Brayton variants",
+        ("ideal", Brayton(8, 1300)),
+        ("losses <85 % & 88 %>", GasTurbineCycles.Brayton(ColdAirStandard.Air, 300.Kelvins(), 100.Kilopascals(), 8, 1300.Kelvins(), new BraytonOptions { CompressorEfficiency = 0.85, TurbineEfficiency = 0.88 })),
+        ("regenerated", TestCycles.RegenerativeBrayton()));
+
+    public static CycleResult Brayton(double pressureRatio, double turbineInletKelvin) =>
+        GasTurbineCycles.Brayton(ColdAirStandard.Air, 300.Kelvins(), 100.Kilopascals(), pressureRatio, turbineInletKelvin.Kelvins());
 }

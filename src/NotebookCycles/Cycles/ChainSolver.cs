@@ -83,7 +83,7 @@ internal static class ChainSolver
 
             if (!c.UsedForwardReference && c.Unknowns is null)
             {
-                return Finish(c, start, startFlow);
+                return Finish(c, start, startFlow, pass + 1);
             }
 
             double maxFlow = 0;
@@ -95,7 +95,7 @@ internal static class ChainSolver
             bool converged = pass > 0 && SameUnknowns(unknowns, c.Unknowns) && SameStates(previous, c.States) && Math.Abs(maxFlow - 1.0) <= PassTolerance * 10;
             if (converged)
             {
-                return Finish(c, start, startFlow);
+                return Finish(c, start, startFlow, pass + 1);
             }
 
             unknowns = c.Unknowns;
@@ -158,7 +158,7 @@ internal static class ChainSolver
         return true;
     }
 
-    private static CycleResult Finish(SolveContext c, State start, double startFlow)
+    private static CycleResult Finish(SolveContext c, State start, double startFlow, int passes)
     {
         var steps = c.Steps;
         double heatIn = 0, heatOut = 0, sumQ = 0, expansion = 0, compression = 0, sgenTotal = 0;
@@ -257,6 +257,6 @@ internal static class ChainSolver
         };
 
         ImmutableArray<string> warnings = c.Warnings.Count == 0 ? [] : [.. c.Warnings];
-        return new CycleResult(c.Title, c.Kind, c.Model, [.. c.States], [.. steps], figures, checks.MoveToImmutable(), warnings, c.Options.DeadState, [.. c.StateFlows], c.Record);
+        return new CycleResult(c.Title, c.Kind, c.Model, [.. c.States], [.. steps], figures, checks.MoveToImmutable(), warnings, c.Options.DeadState, [.. c.StateFlows], c.Record) { Passes = passes };
     }
 }

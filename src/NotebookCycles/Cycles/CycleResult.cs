@@ -205,6 +205,9 @@ public sealed class CycleResult
     /// <summary>True when the calculation record (the relation lines) was kept.</summary>
     public bool Recorded { get; }
 
+    /// <summary>How many passes over the chain the solve took: 1 for an unbranched chain, more when regenerators or feedwater heaters couple later states back.</summary>
+    public int Passes { get; internal init; } = 1;
+
     /// <summary>The caution every output of a cycle carries.</summary>
     public const string Caution = "Idealised models for design studies: verify against the applicable codes and licensed engineering practice before sizing equipment.";
 

@@ -249,10 +249,15 @@ internal sealed class SolveContext
             AddWarnings(to);
         }
 
-        // A bleed known from the previous pass leaves the stream after this state.
-        if (_previousUnknowns is not null && _previousUnknowns.TryGetValue("bleed:" + to.Label, out double bleed))
+        // A bleed leaves the stream after this state: this pass's value when its heater came earlier in the chain
+        // (so flows and bleeds stay in proportion within one pass), else the previous pass's.
+        if (_bleeds is not null || _previousUnknowns is not null)
         {
-            Flow -= bleed;
+            string key = "bleed:" + to.Label;
+            if ((_unknowns is not null && _unknowns.TryGetValue(key, out double bleed)) || (_previousUnknowns is not null && _previousUnknowns.TryGetValue(key, out bleed)))
+            {
+                Flow -= bleed;
+            }
         }
 
         Current = to;

@@ -30,6 +30,24 @@ public class CycleBenchmarks
     [Benchmark]
     public CycleResult OttoColdAirNoRecord() => AirStandardCycles.Otto(_cold, _t1, _p1, 10, heatAdded: _q, options: NoRecord);
 
+    /// <summary>Reheat-regenerative Rankine with two feedwater heaters (one open, one closed), record kept.</summary>
+    [Benchmark]
+    public CycleResult RankineReheatTwoHeaters() => SteamPlantCycles.Rankine(NotebookCycles.Water.IapwsIf97.Default, Pressure.FromMegapascals(15), Pressure.FromKilopascals(10), RankineDesign);
+
+    /// <summary>The same plant with the record off.</summary>
+    [Benchmark]
+    public CycleResult RankineReheatTwoHeatersNoRecord() => SteamPlantCycles.Rankine(NotebookCycles.Water.IapwsIf97.Default, Pressure.FromMegapascals(15), Pressure.FromKilopascals(10), RankineDesign, options: NoRecord);
+
+    internal static readonly RankineOptions RankineDesign = new()
+    {
+        TurbineInletTemperature = Temperature.FromDegreesCelsius(600),
+        ReheatPressure = Pressure.FromMegapascals(4),
+        ReheatTemperature = Temperature.FromDegreesCelsius(600),
+        TurbineEfficiency = 0.88,
+        PumpEfficiency = 0.85,
+        FeedwaterHeaters = [FeedwaterHeater.ClosedAt(Pressure.FromMegapascals(4)), FeedwaterHeater.OpenAt(Pressure.FromKilopascals(500))],
+    };
+
     [Benchmark]
     public CycleResult BraytonRegenerativeNoRecord() => GasTurbineCycles.Brayton(_cold, _t1, _p1, 8, 1300.Kelvins(), new BraytonOptions { RegeneratorEffectiveness = 0.8, CompressorEfficiency = 0.85, TurbineEfficiency = 0.88 }, options: NoRecord);
 }
