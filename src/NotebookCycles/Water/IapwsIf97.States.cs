@@ -24,7 +24,7 @@ public sealed partial class IapwsIf97
             case 5:
                 return If97Core.Gibbs(region, temperature, p).ToStatePoint(PhaseOf(region, temperature, p, false));
             case 3:
-                return If97Core.Region3TP(temperature, p, temperature < Region3.Tc && p > Region4.SaturationPressure(temperature), double.NaN);
+                return If97Core.Region3TP(temperature, p, temperature < Region3.Tc && p > Region4.SaturationPressure(temperature), If97Core.Region3StartRho(temperature, p));
             default:
                 return SaturationPolicy switch
                 {
@@ -186,13 +186,16 @@ public sealed partial class IapwsIf97
     }
 
     /// <inheritdoc />
-    /// <remarks>Brent iteration in ln p on s(p, h) (each step a (p,h) state). Seam for the SR2-01/SR4-04 backward p(h,s).</remarks>
+    /// <remarks>
+    /// Start p from the SR2-01/SR4-04 backward equations (region chosen by the SR4-04 boundary lines), then Newton in ln p
+    /// on s(p, h) with each step a (p,h) state; Brent iteration in ln p where no backward equation applies.
+    /// </remarks>
     public StatePoint FromHS(double enthalpy, double entropy)
     {
         Check.Finite(Name, StateProperty.Enthalpy, enthalpy, StateProperty.Enthalpy, enthalpy, StateProperty.Entropy, entropy);
         Check.Finite(Name, StateProperty.Entropy, entropy, StateProperty.Enthalpy, enthalpy, StateProperty.Entropy, entropy);
         double h = enthalpy * 1e-3, s = entropy * 1e-3;
-        if (If97Core.SolveHS(h, s, double.NaN, out var state))
+        if (If97Core.SolveHS(h, s, If97Core.BackwardPressureHS(h, s), out var state))
         {
             return state;
         }
