@@ -780,7 +780,7 @@ internal static class If97Core
     /// </summary>
     internal static bool SolveHS(double h, double s, double startP, out StatePoint state)
     {
-        if (startP > IapwsIf97.PSearchMin && startP < IapwsIf97.PMax && TryNewtonHS(h, s, startP, out state))
+        if (startP > 0 && TryNewtonHS(h, s, Math.Clamp(startP, IapwsIf97.PSearchMin, IapwsIf97.PMax), out state))
         {
             return true;
         }
@@ -853,7 +853,7 @@ internal static class If97Core
             }
 
             double next = x + step;
-            if (!(next > lo && next < hi))
+            if (!(next >= lo && next <= hi))
             {
                 break;
             }
@@ -882,9 +882,11 @@ internal static class If97Core
 
         if (s <= Sr303.SSatLiquid623)
         {
-            if (s >= Sr404.SSatLiquid273 && h > Sr404.HSatLiquid1(s))
+            // At a given s, h rises with p (dh = v·dp): wet states lie below the saturated-liquid line. Within 1 kJ/kg
+            // of it (compressed liquid at low p is that close) the region-1 start is still the better guess.
+            if (s >= Sr404.SSatLiquid273 && h < Sr404.HSatLiquid1(s) - 1.0)
             {
-                return double.NaN; // wet, low quality: no backward equation
+                return WetStartWithoutBackward;
             }
 
             if (s >= Sr303.Region3SMin && h > Sr404.HB13(s))
@@ -897,7 +899,7 @@ internal static class If97Core
 
         if (s <= Sr303.SCritical)
         {
-            return h > Sr404.HSatLiquid3a(s) ? double.NaN : Region3PressureHS(h, s);
+            return h < Sr404.HSatLiquid3a(s) - 1.0 ? WetStartWithoutBackward : Region3PressureHS(h, s);
         }
 
         if (s <= Sr404.S2bc)
@@ -930,8 +932,28 @@ internal static class If97Core
         return Region2PressureHS(h, s);
     }
 
-    private static double Region2PressureHS(double h, double s) =>
-        h >= Sr201.Region2HMin && h <= Sr201.Region2HMax && s >= Sr201.Region2SMin && s <= Sr201.Region2SMax ? Sr201.P2HS(h, s) : double.NaN;
+    /// <summary>
+    /// Start (MPa) for wet steam with s below s''(623.15 K), where SR4-04 gives no Tsat(h,s): a fixed mid-dome pressure;
+    /// s(p, h) is smooth and nearly linear in ln p across the dome, so Newton needs a few more steps but no bracket.
+    /// </summary>
+    private const double WetStartWithoutBackward = 1.0;
+
+    /// <summary>Lowest pressure (MPa) the region-2 start below SR2-01's entropy range aims at (dilute steam).</summary>
+    private const double DiluteSteamStart = 1e-3;
+
+    private static double Region2PressureHS(double h, double s)
+    {
+        if (h >= Sr201.Region2HMin && h <= Sr201.Region2HMax && s >= Sr201.Region2SMin && s <= Sr201.Region2SMax)
+        {
+            return Sr201.P2HS(h, s);
+        }
+
+        // Beyond SR2-01's entropy range the steam is dilute and nearly ideal: s falls by R per unit of ln p at constant h,
+        // so scale a low reference pressure by exp(−(s − s_max)/R).
+        return s > Sr201.Region2SMax && h >= Sr201.Region2HMin && h <= Sr201.Region2HMax
+            ? DiluteSteamStart * Math.Exp(-(s - Sr201.Region2SMax) / Props.R)
+            : double.NaN;
+    }
 
     private static double Region3PressureHS(double h, double s) =>
         h >= Sr303.Region3HMin && h <= Sr303.Region3HMax && s >= Sr303.Region3SMin && s <= Sr303.Region3SMax ? Sr404.P3HS(h, s) : double.NaN;
@@ -939,9 +961,14 @@ internal static class If97Core
     private static double WetPressureHS(double h, double s, double hVapour)
     {
         double hTriple = Sr404.HSatLiquid273 + TMin * (s - Sr404.SSatLiquid273);
-        if (!(s >= Sr303.SSatVapour623 && h >= hTriple && h <= hVapour))
+        if (!(h >= hTriple && h <= hVapour))
         {
             return double.NaN;
+        }
+
+        if (s < Sr303.SSatVapour623)
+        {
+            return WetStartWithoutBackward;
         }
 
         double t = Sr404.TsatHS(h, s);
