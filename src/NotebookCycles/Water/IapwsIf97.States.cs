@@ -8,7 +8,8 @@ public sealed partial class IapwsIf97
 {
     /// <inheritdoc />
     /// <remarks>
-    /// Direct evaluation of the region's basic equation (region 3: density by bracketed Newton on eq. 28). On the
+    /// Direct evaluation of the region's basic equation (region 3: density by Newton on eq. 28 from the SR5-05 v(p,T)
+    /// backward value, bracketed Newton if that start is refused). On the
     /// saturation line (see <see cref="SaturationTolerance"/>) the <see cref="SaturationPolicy"/> applies.
     /// </remarks>
     public StatePoint FromTP(double temperature, double pressure)
@@ -95,8 +96,9 @@ public sealed partial class IapwsIf97
     /// <inheritdoc />
     /// <remarks>
     /// Regions 1 and 2: the release's backward equation T(p,h), then Newton steps on the forward equation until h
-    /// reproduces the input to 1e-11 relative (usually one or two steps). Regions 3 and 5: bracketed Newton on the
-    /// forward equation. Two-phase: lever rule between the saturated phases at Tsat(p) (eq. 31).
+    /// reproduces the input to 1e-11 relative (usually one or two steps). Region 3: the SR3-03 backward T and v, then
+    /// Newton in (ρ, T) on the forward equation (bracketed Newton in T if the start is refused). Region 5: bracketed
+    /// Newton on the forward equation. Two-phase: lever rule between the saturated phases at Tsat(p) (eq. 31).
     /// </remarks>
     public StatePoint FromPH(double pressure, double enthalpy) => FromPY(pressure, enthalpy, StateProperty.Enthalpy);
 

@@ -64,7 +64,7 @@ internal static class If97Core
         return Gibbs(region, t, p).ToStatePoint(IapwsIf97.PhaseOf(region, t, p, liquidSide));
     }
 
-    /// <summary>Region-3 state from (T, p): density by bracketed Newton on eq. 28. Seam: <paramref name="startRho"/> (a v(p,T) backward value).</summary>
+    /// <summary>Region-3 state from (T, p): density by Newton on eq. 28 from <paramref name="startRho"/> (kg/m³, 1 / SR5-05 v(p,T); NaN: none), bracketed Newton when the start is refused.</summary>
     internal static StatePoint Region3TP(double t, double p, bool liquidBranch, double startRho)
     {
         var branch = t >= Region3.Tc ? Region3Density.Branch.Single : (liquidBranch ? Region3Density.Branch.Liquid : Region3Density.Branch.Vapour);
@@ -775,8 +775,9 @@ internal static class If97Core
     }
 
     /// <summary>
-    /// State from (h kJ/kg, s kJ/(kg·K)): Brent in ln p on s(p, h), which falls monotonically with p (∂s/∂p at constant
-    /// h is −v/T). Seam: <paramref name="startP"/> (an SR2-01/SR4-04 p(h,s) value; NaN: none).
+    /// State from (h kJ/kg, s kJ/(kg·K)) on s(p, h), which falls monotonically with p (∂s/∂p at constant h is −v/T):
+    /// from <paramref name="startP"/> (MPa, a <see cref="BackwardPressureHS"/> value) Newton in ln p; without a start
+    /// (NaN), or when the Newton iteration cannot finish, Brent in ln p over the whole pressure range.
     /// </summary>
     internal static bool SolveHS(double h, double s, double startP, out StatePoint state)
     {
