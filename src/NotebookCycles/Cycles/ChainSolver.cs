@@ -17,6 +17,9 @@ internal abstract class ProcessSpec
     /// <summary>The process in words, lower case ("isentropic compression").</summary>
     public abstract string Describe { get; }
 
+    /// <summary>True when the step refers to states later in the chain, so the chain is solved in several passes.</summary>
+    public virtual bool Couples => false;
+
     public abstract void Apply(SolveContext c);
 }
 
@@ -67,12 +70,20 @@ internal static class ChainSolver
         }
 
         State start = startSpec.Compute(title, model);
+        bool coupled = false;
+        foreach (var spec in specs)
+        {
+            coupled |= spec.Couples;
+        }
+
+        // Coupled chains repeat most property calls exactly from pass to pass: remember them (the models are pure).
+        var memo = coupled ? new Dictionary<(StateProperty, double, StateProperty, double), StatePoint>(64) : null;
         Dictionary<string, double>? unknowns = null;
         Dictionary<string, State>? previous = null;
         double startFlow = 1.0;
         for (int pass = 0; pass < MaximumPasses; pass++)
         {
-            var c = new SolveContext(title, kind, model, options, unknowns, previous, startFlow);
+            var c = new SolveContext(title, kind, model, options, unknowns, previous, startFlow) { Memo = memo };
             c.SetStart(start);
             for (int i = 0; i < specs.Length; i++)
             {
@@ -96,6 +107,19 @@ internal static class ChainSolver
             if (converged)
             {
                 return Finish(c, start, startFlow, pass + 1);
+            }
+
+            // Flows (bleeds, drains) scale with the start flow: store them as they will be after normalising, so a
+            // pass whose only difference is the scale is recognised as converged.
+            if (c.Unknowns is { } found && maxFlow != 1.0)
+            {
+                foreach (var key in found.Keys.ToArray())
+                {
+                    if (key.StartsWith("bleed:", StringComparison.Ordinal) || key.StartsWith("inj:", StringComparison.Ordinal))
+                    {
+                        found[key] /= maxFlow;
+                    }
+                }
             }
 
             unknowns = c.Unknowns;

@@ -85,6 +85,8 @@ internal sealed class RegeneratorColdSpec(string label, string hotInlet, double 
 {
     private string? _process;
 
+    public override bool Couples => true;
+
     public override string Describe => "regenerator, cold side";
 
     public override void Apply(SolveContext c)
@@ -191,6 +193,8 @@ internal sealed class RegeneratorHotSpec(string label, string coldOutlet, double
 /// </summary>
 internal sealed class OpenFeedwaterHeaterSpec(string label, string bleedFrom) : ProcessSpec(label)
 {
+    public override bool Couples => true;
+
     public override string Describe => "open feedwater heater";
 
     public override void Apply(SolveContext c)
@@ -263,6 +267,8 @@ public enum DrainRouting
 /// </summary>
 internal sealed class ClosedFeedwaterHeaterSpec(string label, string bleedFrom, double terminalDifference, DrainRouting drain, string? drainTo, double drainPumpEfficiency) : ProcessSpec(label)
 {
+    public override bool Couples => true;
+
     public override string Describe => "closed feedwater heater";
 
     public override void Apply(SolveContext c)

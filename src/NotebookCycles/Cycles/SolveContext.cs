@@ -88,6 +88,9 @@ internal sealed class SolveContext
 
     public Dictionary<string, double>? Unknowns => _unknowns;
 
+    /// <summary>Property calls remembered across the passes of a coupled chain (null for a plain chain).</summary>
+    public Dictionary<(StateProperty, double, StateProperty, double), StatePoint>? Memo { get; init; }
+
     public int StepCount => _steps.Count;
 
     public void SetStart(State start)
@@ -170,7 +173,19 @@ internal sealed class SolveContext
     {
         try
         {
-            return Model.Solve(first, firstValue, second, secondValue);
+            if (Memo is null)
+            {
+                return Model.Solve(first, firstValue, second, secondValue);
+            }
+
+            var key = (first, firstValue, second, secondValue);
+            if (!Memo.TryGetValue(key, out var point))
+            {
+                point = Model.Solve(first, firstValue, second, secondValue);
+                Memo[key] = point;
+            }
+
+            return point;
         }
         catch (PropertyModelException e)
         {

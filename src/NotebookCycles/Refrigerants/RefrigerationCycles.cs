@@ -191,6 +191,8 @@ public static class RefrigerationCycles
 /// </summary>
 internal sealed class FlashVapourMixingSpec(string label, string flashInlet) : ProcessSpec(label)
 {
+    public override bool Couples => true;
+
     public override string Describe => "mixing with flash-tank vapour";
 
     public override void Apply(SolveContext c)
@@ -236,6 +238,8 @@ internal sealed class FlashVapourMixingSpec(string label, string flashInlet) : P
 /// </summary>
 internal sealed class FlashTankLiquidSpec(string label) : ProcessSpec(label)
 {
+    public override bool Couples => true;
+
     public override string Describe => "flash tank, liquid outlet";
 
     public override void Apply(SolveContext c)

@@ -8,7 +8,8 @@ public sealed partial class IapwsIf97
 {
     /// <inheritdoc />
     /// <remarks>
-    /// Direct evaluation of the region's basic equation (region 3: density by bracketed Newton on eq. 28). On the
+    /// Direct evaluation of the region's basic equation (region 3: density by Newton on eq. 28 from the SR5-05 v(p,T)
+    /// backward value, bracketed Newton if that start is refused). On the
     /// saturation line (see <see cref="SaturationTolerance"/>) the <see cref="SaturationPolicy"/> applies.
     /// </remarks>
     public StatePoint FromTP(double temperature, double pressure)
@@ -24,7 +25,7 @@ public sealed partial class IapwsIf97
             case 5:
                 return If97Core.Gibbs(region, temperature, p).ToStatePoint(PhaseOf(region, temperature, p, false));
             case 3:
-                return If97Core.Region3TP(temperature, p, temperature < Region3.Tc && p > Region4.SaturationPressure(temperature), double.NaN);
+                return If97Core.Region3TP(temperature, p, temperature < Region3.Tc && p > Region4.SaturationPressure(temperature), If97Core.Region3StartRho(temperature, p));
             default:
                 return SaturationPolicy switch
                 {
@@ -95,8 +96,9 @@ public sealed partial class IapwsIf97
     /// <inheritdoc />
     /// <remarks>
     /// Regions 1 and 2: the release's backward equation T(p,h), then Newton steps on the forward equation until h
-    /// reproduces the input to 1e-11 relative (usually one or two steps). Regions 3 and 5: bracketed Newton on the
-    /// forward equation. Two-phase: lever rule between the saturated phases at Tsat(p) (eq. 31).
+    /// reproduces the input to 1e-11 relative (usually one or two steps). Region 3: the SR3-03 backward T and v, then
+    /// Newton in (ρ, T) on the forward equation (bracketed Newton in T if the start is refused). Region 5: bracketed
+    /// Newton on the forward equation. Two-phase: lever rule between the saturated phases at Tsat(p) (eq. 31).
     /// </remarks>
     public StatePoint FromPH(double pressure, double enthalpy) => FromPY(pressure, enthalpy, StateProperty.Enthalpy);
 
@@ -186,13 +188,16 @@ public sealed partial class IapwsIf97
     }
 
     /// <inheritdoc />
-    /// <remarks>Brent iteration in ln p on s(p, h) (each step a (p,h) state). Seam for the SR2-01/SR4-04 backward p(h,s).</remarks>
+    /// <remarks>
+    /// Start p from the SR2-01/SR4-04 backward equations (region chosen by the SR4-04 boundary lines), then Newton in ln p
+    /// on s(p, h) with each step a (p,h) state; Brent iteration in ln p where no backward equation applies.
+    /// </remarks>
     public StatePoint FromHS(double enthalpy, double entropy)
     {
         Check.Finite(Name, StateProperty.Enthalpy, enthalpy, StateProperty.Enthalpy, enthalpy, StateProperty.Entropy, entropy);
         Check.Finite(Name, StateProperty.Entropy, entropy, StateProperty.Enthalpy, enthalpy, StateProperty.Entropy, entropy);
         double h = enthalpy * 1e-3, s = entropy * 1e-3;
-        if (If97Core.SolveHS(h, s, double.NaN, out var state))
+        if (If97Core.SolveHS(h, s, If97Core.BackwardPressureHS(h, s), out var state))
         {
             return state;
         }

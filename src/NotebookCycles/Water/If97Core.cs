@@ -1,6 +1,7 @@
 using System.Runtime.CompilerServices;
 using NotebookCycles.Numerics;
 using NotebookCycles.Properties;
+using NotebookCycles.Water.Backward;
 
 namespace NotebookCycles.Water;
 
@@ -57,13 +58,13 @@ internal static class If97Core
         if (region == 3)
         {
             bool liquid = t < Region3.Tc && (p > Region4.SaturationPressure(t) || (liquidSide && IapwsIf97.OnSaturation(p, Region4.SaturationPressure(t))));
-            return Region3TP(t, p, liquid, startRho);
+            return Region3TP(t, p, liquid, double.IsNaN(startRho) ? Region3StartRho(t, p) : startRho);
         }
 
         return Gibbs(region, t, p).ToStatePoint(IapwsIf97.PhaseOf(region, t, p, liquidSide));
     }
 
-    /// <summary>Region-3 state from (T, p): density by bracketed Newton on eq. 28. Seam: <paramref name="startRho"/> (a v(p,T) backward value).</summary>
+    /// <summary>Region-3 state from (T, p): density by Newton on eq. 28 from <paramref name="startRho"/> (kg/m³, 1 / SR5-05 v(p,T); NaN: none), bracketed Newton when the start is refused.</summary>
     internal static StatePoint Region3TP(double t, double p, bool liquidBranch, double startRho)
     {
         var branch = t >= Region3.Tc ? Region3Density.Branch.Single : (liquidBranch ? Region3Density.Branch.Liquid : Region3Density.Branch.Vapour);
@@ -76,6 +77,13 @@ internal static class If97Core
         // The density root reproduces p to about 1e-13; report the requested p itself.
         return Region3.Properties(rho, t).ToStatePoint(IapwsIf97.PhaseOf(3, t, p, liquidBranch)) with { P = p * 1e6 };
     }
+
+    /// <summary>
+    /// Starting density (kg/m³) for a region-3 (T, p) state: 1 / SR5-05 v3(p, T); NaN outside the range of that
+    /// equation (p from psat(623.15 K) to 100 MPa, T from 623.15 K to TB23(p)).
+    /// </summary>
+    internal static double Region3StartRho(double t, double p) =>
+        p >= Sr505.PMin && p <= Sr505.PMax && t >= Sr505.TMin && t <= Region3.TemperatureB23(p) ? 1.0 / Sr505.V3PT(p, t) : double.NaN;
 
     // ------------------------------------------------------------ saturation
 
@@ -266,8 +274,20 @@ internal static class If97Core
             return Vapour25(p, y, entropy, tb, out state);
         }
 
-        return Region3PY(p, y, entropy, double.NaN, out state);
+        return Region3PY(p, y, entropy, Region3StartT(p, y, entropy), out state);
     }
+
+    /// <summary>
+    /// Starting temperature (K) for a region-3 (p, h) or (p, s) state: SR3-03 T3(p,h) or T3(p,s); NaN outside the
+    /// bounding box those equations accept.
+    /// </summary>
+    internal static double Region3StartT(double p, double y, bool entropy) =>
+        !InRegion3Box(p, y, entropy) ? double.NaN : entropy ? Sr303.T3PS(p, y) : Sr303.T3PH(p, y);
+
+    /// <summary>Whether (p, h or s) lies in the bounding box the SR3-03 equations accept.</summary>
+    private static bool InRegion3Box(double p, double y, bool entropy) =>
+        p >= Sr303.Region3PMin && p <= Sr303.Region3PMax
+        && (entropy ? y >= Sr303.Region3SMin && y <= Sr303.Region3SMax : y >= Sr303.Region3HMin && y <= Sr303.Region3HMax);
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static double Value(in Props pr, bool entropy) => entropy ? pr.S : pr.H;
@@ -428,6 +448,15 @@ internal static class If97Core
     internal static Fit Region3PY(double p, double y, bool entropy, double startT, out StatePoint state)
     {
         double tb = Region3.TemperatureB23(p);
+        if (!double.IsNaN(startT) && InRegion3Box(p, y, entropy))
+        {
+            double v0 = entropy ? Sr303.V3PS(p, y) : Sr303.V3PH(p, y);
+            if (TryRegion3Direct(p, y, entropy, startT, 1.0 / v0, T13 - Pad, tb + Pad, out state))
+            {
+                return Fit.Ok;
+            }
+        }
+
         double lo = T13 - Pad, hi = tb + Pad;
         bool liquidSide = true;
         if (p < Region3.Pc)
@@ -457,6 +486,90 @@ internal static class If97Core
         double t = NewtonBisection.Solve(ref f, lo, hi, guess, "IAPWS-IF97 region 3 T(p, h or s)", 1e-14);
         state = Region3TP(t, p, liquidSide, f.Rho);
         return Fit.Ok;
+    }
+
+    /// <summary>
+    /// Region 3 from (p, h or s) by a two-dimensional Newton iteration in (ρ, T) on the forward Helmholtz equation from
+    /// the SR3-03 backward values (T0, ρ0). Accepted only when the result is provably the state the bracketed solver
+    /// finds: T within [lo, hi], ∂p/∂ρ &gt; 0, and below Tc the density on the side of ρc that the phase requires (T below
+    /// Tsat(p): liquid; above: vapour; p ≥ pc: liquid) with ρc inside the van der Waals loop. h and s rise with T along
+    /// the isobar, so a liquid root below Tsat(p) (vapour root above it) also proves the state is not two-phase.
+    /// False (the caller then brackets) if the iteration leaves the region, stalls, or any check fails.
+    /// </summary>
+    private static bool TryRegion3Direct(double p, double y, bool entropy, double t0, double rho0, double lo, double hi, out StatePoint state)
+    {
+        state = default;
+        double t = t0, rho = rho0;
+        double tolY = PolishTolerance * Math.Max(Math.Abs(y), entropy ? 0.01 : 1.0);
+        bool converged = false;
+        double dpdr = 0;
+        for (int i = 0; i < 10 && !converged; i++)
+        {
+            if (!(t > lo && t < hi && rho > Region3Density.RhoLow && rho < Region3Density.RhoHigh))
+            {
+                return false;
+            }
+
+            Region3.Sums(rho, t, out double phi, out double dPd, out double d2Pdd, out double tPt, out double t2Ptt, out double dtPdt);
+            double rt = Props.R * t;
+            double rp = rho * rt * dPd * 1e-3 - p;
+            dpdr = rt * (2 * dPd + d2Pdd) * 1e-3;
+            double dpdt = rho * Props.R * (dPd - dtPdt) * 1e-3;
+            double ry, dydr, dydt;
+            if (entropy)
+            {
+                ry = Props.R * (tPt - phi) - y;
+                dydr = Props.R * (dtPdt - dPd) / rho;
+                dydt = -Props.R * t2Ptt / t;
+            }
+            else
+            {
+                ry = rt * (tPt + dPd) - y;
+                dydr = rt * (dtPdt + dPd + d2Pdd) / rho;
+                dydt = Props.R * (dPd - t2Ptt - dtPdt);
+            }
+
+            double det = dpdr * dydt - dpdt * dydr;
+            double dr = (rp * dydt - ry * dpdt) / det;
+            double dt = (dpdr * ry - dydr * rp) / det;
+            if (double.IsNaN(dr) || double.IsNaN(dt))
+            {
+                return false;
+            }
+
+            rho -= dr;
+            t -= dt;
+            converged = Math.Abs(dr) <= 1e-13 * rho && Math.Abs(dt) <= 1e-13 * t && Math.Abs(ry) <= tolY;
+        }
+
+        if (!converged || !(dpdr > 0) || !(t > lo && t < hi))
+        {
+            return false;
+        }
+
+        bool liquidSide = true;
+        if (p < Region3.Pc)
+        {
+            liquidSide = t < Region4.SaturationTemperature(p);
+        }
+
+        if (t < Region3.Tc)
+        {
+            Region3.Pressure(Region3.RhoC, t, out double slopeC);
+            if (!(slopeC < 0) || (liquidSide ? rho <= Region3.RhoC : rho >= Region3.RhoC))
+            {
+                return false;
+            }
+        }
+
+        var pr = Region3.Properties(rho, t);
+        if (!(Math.Abs(Value(pr, entropy) - y) <= tolY))
+        {
+            return false;
+        }
+
+        state = pr.ToStatePoint(IapwsIf97.PhaseOf(3, t, p, liquidSide)) with { P = p * 1e6 };
+        return true;
     }
 
     // ------------------------------------------------------------ (T, y) with y = s or v, by iteration in ln p
@@ -662,11 +775,17 @@ internal static class If97Core
     }
 
     /// <summary>
-    /// State from (h kJ/kg, s kJ/(kg·K)): Brent in ln p on s(p, h), which falls monotonically with p (∂s/∂p at constant
-    /// h is −v/T). Seam: <paramref name="startP"/> (an SR2-01/SR4-04 p(h,s) value; NaN: none).
+    /// State from (h kJ/kg, s kJ/(kg·K)) on s(p, h), which falls monotonically with p (∂s/∂p at constant h is −v/T):
+    /// from <paramref name="startP"/> (MPa, a <see cref="BackwardPressureHS"/> value) Newton in ln p; without a start
+    /// (NaN), or when the Newton iteration cannot finish, Brent in ln p over the whole pressure range.
     /// </summary>
     internal static bool SolveHS(double h, double s, double startP, out StatePoint state)
     {
+        if (startP > 0 && TryNewtonHS(h, s, Math.Clamp(startP, IapwsIf97.PSearchMin, IapwsIf97.PMax), out state))
+        {
+            return true;
+        }
+
         var f = new HsGap { H = h, S = s };
         double lo = Math.Log(IapwsIf97.PSearchMin), hi = Math.Log(IapwsIf97.PMax);
         if (!double.IsNaN(startP) && startP > IapwsIf97.PSearchMin && startP < IapwsIf97.PMax)
@@ -698,6 +817,163 @@ internal static class If97Core
         }
 
         return Math.Abs(state.S * 1e-3 - s) <= 1e-9 * Math.Max(Math.Abs(s), 1.0);
+    }
+
+    /// <summary>
+    /// (h, s) by Newton's method in ln p on s(p, h) − s from a backward start, each step a (p, h) state; the exact
+    /// derivative is ∂s/∂ln p at constant h = −p·v/T (dome included). s(p, h) falls monotonically with p, so the root
+    /// is unique and any root found is the state the bracketed solver finds; the sign of each residual narrows a
+    /// bracket, and a step leaving it or a (p, h) state that does not exist hands over to the bracketed solver.
+    /// </summary>
+    private static bool TryNewtonHS(double h, double s, double p0, out StatePoint state)
+    {
+        double lo = Math.Log(IapwsIf97.PSearchMin), hi = Math.Log(IapwsIf97.PMax);
+        double x = Math.Log(p0);
+        double scale = Math.Max(Math.Abs(s), 1.0);
+        for (int i = 0; i < 8; i++)
+        {
+            if (SolvePY(Math.Exp(x), h, false, out state) != Fit.Ok)
+            {
+                return false;
+            }
+
+            double g = state.S * 1e-3 - s;
+            if (g > 0)
+            {
+                lo = x; // s too high: p is too low
+            }
+            else
+            {
+                hi = x;
+            }
+
+            double step = g / (state.P * state.V / state.T * 1e-3);
+            if (Math.Abs(step) <= 1e-14 || Math.Abs(g) <= 2e-15 * scale)
+            {
+                return Math.Abs(g) <= 1e-9 * scale;
+            }
+
+            double next = x + step;
+            if (!(next >= lo && next <= hi))
+            {
+                break;
+            }
+
+            x = next;
+        }
+
+        // Stalled at the noise floor of s(p, h) (compressed liquid at low p, where s hardly depends on p): accept
+        // the last state if it meets the (p, h) polishing tolerance, as the bracketed solver would.
+        return SolvePY(Math.Exp(x), h, false, out state) == Fit.Ok && Math.Abs(state.S * 1e-3 - s) <= PolishTolerance * scale;
+    }
+
+    /// <summary>
+    /// Starting pressure (MPa) for an (h kJ/kg, s kJ/(kg·K)) state from the supplementary backward equations, with the
+    /// region chosen by the SR4-04 boundary lines at s: h'1(s) and h'3a(s) (saturated liquid), h''2ab(s) and h''2c3b(s)
+    /// (saturated vapour), hB13(s) (regions 1/3), TB23(h, s) with pB23 (regions 2/3). Region 1: SR2-01 p1(h,s);
+    /// region 2: p2(h,s); region 3: SR4-04 p3(h,s); wet steam: psat(Tsat(h,s)) of SR4-04. NaN where no backward equation
+    /// applies (region 5, wet steam with s below s''(623.15 K), outside the bounding boxes): the caller then brackets.
+    /// </summary>
+    internal static double BackwardPressureHS(double h, double s)
+    {
+        if (double.IsNaN(h) || double.IsNaN(s))
+        {
+            return double.NaN;
+        }
+
+        if (s <= Sr303.SSatLiquid623)
+        {
+            // At a given s, h rises with p (dh = v·dp): wet states lie below the saturated-liquid line. Within 1 kJ/kg
+            // of it (compressed liquid at low p is that close) the region-1 start is still the better guess.
+            if (s >= Sr404.SSatLiquid273 && h < Sr404.HSatLiquid1(s) - 1.0)
+            {
+                return WetStartWithoutBackward;
+            }
+
+            if (s >= Sr303.Region3SMin && h > Sr404.HB13(s))
+            {
+                return Region3PressureHS(h, s);
+            }
+
+            return h >= Sr201.Region1HMin && h <= Sr201.Region1HMax && s >= Sr201.Region1SMin ? Sr201.P1HS(h, s) : double.NaN;
+        }
+
+        if (s <= Sr303.SCritical)
+        {
+            return h < Sr404.HSatLiquid3a(s) - 1.0 ? WetStartWithoutBackward : Region3PressureHS(h, s);
+        }
+
+        if (s <= Sr404.S2bc)
+        {
+            double hv = Sr404.HSatVapour2c3b(s);
+            if (h < hv)
+            {
+                return WetPressureHS(h, s, hv);
+            }
+
+            if (s >= Sr404.SB23Min && s <= Sr404.SB23Max && h >= Sr404.HB23Min && h <= Sr404.HB23Max)
+            {
+                double pb = Region3.PressureB23(Sr404.TB23(h, s));
+                double p2 = Sr201.P2cHS(h, s);
+                return p2 > pb ? Region3PressureHS(h, s) : p2;
+            }
+
+            return s < Sr404.SB23Min ? Region3PressureHS(h, s) : Region2PressureHS(h, s);
+        }
+
+        if (s <= Sr404.SSatVapour273)
+        {
+            double hv = Sr404.HSatVapour2ab(s);
+            if (h < hv)
+            {
+                return WetPressureHS(h, s, hv);
+            }
+        }
+
+        return Region2PressureHS(h, s);
+    }
+
+    /// <summary>
+    /// Start (MPa) for wet steam with s below s''(623.15 K), where SR4-04 gives no Tsat(h,s): a fixed mid-dome pressure;
+    /// s(p, h) is smooth and nearly linear in ln p across the dome, so Newton needs a few more steps but no bracket.
+    /// </summary>
+    private const double WetStartWithoutBackward = 1.0;
+
+    /// <summary>Lowest pressure (MPa) the region-2 start below SR2-01's entropy range aims at (dilute steam).</summary>
+    private const double DiluteSteamStart = 1e-3;
+
+    private static double Region2PressureHS(double h, double s)
+    {
+        if (h >= Sr201.Region2HMin && h <= Sr201.Region2HMax && s >= Sr201.Region2SMin && s <= Sr201.Region2SMax)
+        {
+            return Sr201.P2HS(h, s);
+        }
+
+        // Beyond SR2-01's entropy range the steam is dilute and nearly ideal: s falls by R per unit of ln p at constant h,
+        // so scale a low reference pressure by exp(−(s − s_max)/R).
+        return s > Sr201.Region2SMax && h >= Sr201.Region2HMin && h <= Sr201.Region2HMax
+            ? DiluteSteamStart * Math.Exp(-(s - Sr201.Region2SMax) / Props.R)
+            : double.NaN;
+    }
+
+    private static double Region3PressureHS(double h, double s) =>
+        h >= Sr303.Region3HMin && h <= Sr303.Region3HMax && s >= Sr303.Region3SMin && s <= Sr303.Region3SMax ? Sr404.P3HS(h, s) : double.NaN;
+
+    private static double WetPressureHS(double h, double s, double hVapour)
+    {
+        double hTriple = Sr404.HSatLiquid273 + TMin * (s - Sr404.SSatLiquid273);
+        if (!(h >= hTriple && h <= hVapour))
+        {
+            return double.NaN;
+        }
+
+        if (s < Sr303.SSatVapour623)
+        {
+            return WetStartWithoutBackward;
+        }
+
+        double t = Sr404.TsatHS(h, s);
+        return t >= TMin && t <= T13 ? Region4.SaturationPressure(t) : double.NaN;
     }
 
     private struct IsochoreGap : IScalarFunction

@@ -48,11 +48,69 @@ internal static class Region3Density
     }
 
     /// <summary>
+    /// Plain Newton iteration on p3(ρ, T) = p from a backward start (SR5-05 v(p,T)), accepted only when the root is
+    /// provably the one the bracketed search would find: a positive slope ∂p/∂ρ, and below Tc the critical density
+    /// inside the van der Waals loop (∂p/∂ρ &lt; 0 there) with every iterate on the branch's side of it. Above ρc the
+    /// isotherm falls to the liquid spinodal and then rises, below ρc it rises to the vapour spinodal and then falls,
+    /// so each side holds one root of positive slope. False (the caller then brackets) on any doubt.
+    /// </summary>
+    private static bool TryPolish(double p, double t, Branch branch, double start, out double rho)
+    {
+        rho = double.NaN;
+        bool loop = t < Region3.Tc;
+        if (loop)
+        {
+            if (branch == Branch.Single)
+            {
+                return false;
+            }
+
+            Region3.Pressure(Region3.RhoC, t, out double slopeC);
+            if (!(slopeC < 0))
+            {
+                return false;
+            }
+        }
+
+        bool liquid = branch == Branch.Liquid;
+        double x = start;
+        for (int i = 0; i < 8; i++)
+        {
+            double r = Region3.Pressure(x, t, out double d) - p;
+            if (!(d > 0))
+            {
+                return false;
+            }
+
+            double next = x - r / d;
+            if (!(next > RhoLow && next < RhoHigh) || (loop && (liquid ? next <= Region3.RhoC : next >= Region3.RhoC)))
+            {
+                return false;
+            }
+
+            double step = Math.Abs(next - x);
+            x = next;
+            if (step <= 1e-13 * x)
+            {
+                rho = x;
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    /// <summary>
     /// Density (kg/m³) at (p MPa, T K) on the given branch; <paramref name="start"/> is a starting density (NaN: none),
     /// the seam for a backward equation v(p,T). Returns NaN if the branch has no root at (p, T).
     /// </summary>
     public static double Solve(double p, double t, Branch branch, double start = double.NaN)
     {
+        if (start > RhoLow && start < RhoHigh && TryPolish(p, t, branch, start, out double polished))
+        {
+            return polished;
+        }
+
         var f = new PressureGap { T = t, P = p };
         double lo = RhoLow, hi = RhoHigh;
         if (branch != Branch.Single && t < Region3.Tc)

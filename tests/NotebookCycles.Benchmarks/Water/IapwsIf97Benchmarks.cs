@@ -62,4 +62,24 @@ public class IapwsIf97Benchmarks
     /// <summary>Full state from (p, s), wet steam.</summary>
     [Benchmark]
     public StatePoint FromPSTwoPhase() => _steam.FromPS(10e3, 6000.0);
+
+    /// <summary>Region 3 from (p, T): T = 650 K, p = 25 MPa (density found by iteration).</summary>
+    [Benchmark]
+    public StatePoint ForwardRegion3() => _steam.FromTP(650.0, 25e6);
+
+    /// <summary>Full state from (p, h) in region 3: 25 MPa, 2000 kJ/kg.</summary>
+    [Benchmark]
+    public StatePoint FromPHRegion3() => _steam.FromPH(25e6, 2000e3);
+
+    /// <summary>Full state from (h, s), compressed liquid: 500 kJ/kg, 1.4 kJ/(kg·K).</summary>
+    [Benchmark]
+    public StatePoint FromHSLiquid() => _steam.FromHS(500e3, 1400.0);
+
+    /// <summary>Full state from (h, s), superheated steam: 3000 kJ/kg, 7 kJ/(kg·K).</summary>
+    [Benchmark]
+    public StatePoint FromHSVapour() => _steam.FromHS(3000e3, 7000.0);
+
+    /// <summary>Full state from (h, s), wet steam: 2300 kJ/kg, 6.5 kJ/(kg·K).</summary>
+    [Benchmark]
+    public StatePoint FromHSTwoPhase() => _steam.FromHS(2300e3, 6500.0);
 }

@@ -9,8 +9,8 @@ namespace NotebookCycles.Water.Backward;
 /// <remarks>
 /// Valid in region 3 of IAPWS-IF97: p from p_sat(623.15 K) = 16.529164253 MPa to 100 MPa and T from 623.15 K to
 /// T_B23(p). The subregion test needs two equations of IAPWS-IF97 itself, the saturation-temperature equation
-/// (R7-97 Eq. 31) and the B23 temperature equation (R7-97 Eq. 6, used for the range check); both are kept here
-/// as private helpers so these functions stand alone.
+/// (R7-97 Eq. 31) and the B23 temperature equation (R7-97 Eq. 6, used for the range check); both come from the
+/// forward model (<see cref="Region4.SaturationTemperature"/>, <see cref="Region3.TemperatureB23"/>).
 /// Inputs outside a range, and NaN inputs, throw <see cref="ArgumentOutOfRangeException"/> naming the input,
 /// its value and the range; nothing is clamped or extrapolated.
 /// </remarks>
@@ -48,13 +48,6 @@ internal static partial class Sr505
     private static readonly double[] NQu = [0.565603648239126e3, 0.529062258221222e1, -0.102020639611016, 0.122240301070145e-2];
     private static readonly double[] NRx = [0.584561202520006e3, -0.102961025163669e1, 0.243293362700452, -0.294905044740799e-2];
     private static readonly double[] NUv = [0.528199646263062e3, 0.890579602135307e1, -0.222814134903755, 0.286791682263697e-2];
-
-    // IAPWS-IF97 (R7-97) Eq. 31 coefficients n1..n10 of the saturation line, for T_sat(p).
-    private static readonly double[] NSat =
-    [
-        0.11670521452767e4, -0.72421316703206e6, -0.17073846940092e2, 0.12020824702470e5, -0.32325550322333e7,
-        0.14915108613530e2, -0.48232657361591e4, 0.40511340542057e6, -0.23855557567849, 0.65017534844798e3,
-    ];
 
     /// <summary>Boundary 3a/3b, T_3ab(p) (SR5-05 Eq. 2, logarithmic form), K.</summary>
     /// <param name="p">Pressure, MPa; the release uses it from 25 MPa to 100 MPa, evaluated here over region 3.</param>
@@ -195,21 +188,6 @@ internal static partial class Sr505
         return eq.VStar * sum;
     }
 
-    /// <summary>Saturation temperature from IAPWS-IF97 Eq. 31, K, for the subregion test (p ≤ 22.064 MPa).</summary>
-    internal static double TSat(double p)
-    {
-        double beta = Math.Sqrt(Math.Sqrt(p));
-        double e = beta * beta + NSat[2] * beta + NSat[5];
-        double f = NSat[0] * beta * beta + NSat[3] * beta + NSat[6];
-        double g = NSat[1] * beta * beta + NSat[4] * beta + NSat[7];
-        double d = 2 * g / (-f - Math.Sqrt(f * f - 4 * e * g));
-        double sum = NSat[9] + d;
-        return (sum - Math.Sqrt(sum * sum - 4 * (NSat[8] + NSat[9] * d))) / 2;
-    }
-
-    /// <summary>Temperature on the B23 line from IAPWS-IF97 Eq. 6, K.</summary>
-    internal static double TB23(double p) => 0.57254459862746e3 + Math.Sqrt((p - 0.13918839778870e2) / 0.10192970039326e-2);
-
     private static char Select(double p, double t)
     {
         if (p > 40)
@@ -344,7 +322,7 @@ internal static partial class Sr505
                 return 'c';
             }
 
-            if (t <= TSat(p))
+            if (t <= Region4.SaturationTemperature(p))
             {
                 return 's';
             }
@@ -359,10 +337,10 @@ internal static partial class Sr505
                 return 'c';
             }
 
-            return t <= TSat(p) ? 's' : 't';
+            return t <= Region4.SaturationTemperature(p) ? 's' : 't';
         }
 
-        return t <= TSat(p) ? 'c' : 't';
+        return t <= Region4.SaturationTemperature(p) ? 'c' : 't';
     }
 
     // SR5-05 Table 10: p_sat(643.15 K) < p ≤ 22.5 MPa and T_3qu(p) < T ≤ T_3rx(p).
@@ -398,7 +376,7 @@ internal static partial class Sr505
             return t <= Logarithmic(NWx, p) ? 'z' : 'x';
         }
 
-        if (t <= TSat(p))
+        if (t <= Region4.SaturationTemperature(p))
         {
             if (p <= 21.93161551)
             {
@@ -446,6 +424,6 @@ internal static partial class Sr505
     private static void CheckPT(string equation, double p, double t)
     {
         RangeGuard.Require(equation, nameof(p), p, PMin, PMax, "MPa", "pressure range of IF97 region 3");
-        RangeGuard.Require(equation, "T", t, TMin, TB23(p), "K", "623.15 K to T_B23(p) of IF97 region 3");
+        RangeGuard.Require(equation, "T", t, TMin, Region3.TemperatureB23(p), "K", "623.15 K to T_B23(p) of IF97 region 3");
     }
 }

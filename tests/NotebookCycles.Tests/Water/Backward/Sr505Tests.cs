@@ -1,3 +1,4 @@
+using NotebookCycles.Water;
 using NotebookCycles.Water.Backward;
 using Xunit;
 using Xunit.Abstractions;
@@ -84,22 +85,32 @@ public sealed class Sr505Tests(ITestOutputHelper output)
         VerificationAssert.OutOfRange(() => Sr505.Subregion(10, 630), "p", "10", "16.529164253", "100");
     }
 
-    // The subregion test uses private copies of two IAPWS-IF97 equations; check them against R7-97(2012):
-    // Table 36 (saturation temperature, Eq. 31) and the B23 check value of Eq. 6 (ReferenceData/iapws_if97_verification.csv).
+    // The subregion test uses the forward model's saturation-temperature (R7-97(2012) Eq. 31) and B23 (Eq. 6)
+    // equations; the split below p_3cd must fall exactly on Tsat(p) and the range must end exactly at TB23(p).
     [Theory]
-    [InlineData(0.1, 0.372755919E3)]
-    [InlineData(1.0, 0.453035632E3)]
-    [InlineData(10.0, 0.584149488E3)]
-    public void Private_saturation_temperature_matches_IF97_Table_36(double p, double tsat)
+    [InlineData(17.0)]
+    [InlineData(18.5)]
+    public void Liquid_vapour_split_below_p3cd_is_the_forward_saturation_temperature(double p)
     {
-        Assert.InRange(VerificationQuantities.RelativeError(Sr505.TSat(p), tsat), 0, 1e-8);
+        double ts = Region4.SaturationTemperature(p);
+        Assert.Equal('c', Sr505.Subregion(p, ts));
+        Assert.Equal('t', Sr505.Subregion(p, Math.BitIncrement(ts)));
     }
 
     [Fact]
-    public void Private_B23_temperature_matches_the_IF97_check_value()
+    public void Temperature_range_ends_at_the_forward_B23_temperature()
+    {
+        const double p = 40.0;
+        double tb = Region3.TemperatureB23(p);
+        Assert.True(Sr505.V3PT(p, tb) > 0);
+        Assert.Throws<ArgumentOutOfRangeException>(() => Sr505.V3PT(p, Math.BitIncrement(tb)));
+    }
+
+    [Fact]
+    public void Forward_B23_temperature_meets_the_IF97_check_value()
     {
         // IAPWS R7-97(2012) Section 4, Eq. 6 check: p = 16.5291643 MPa gives T = 623.15 K.
-        Assert.InRange(VerificationQuantities.RelativeError(Sr505.TB23(16.5291643), 0.62315E3), 0, 1e-8);
+        Assert.InRange(VerificationQuantities.RelativeError(Region3.TemperatureB23(16.5291643), 0.62315E3), 0, 1e-8);
     }
 
     [Fact]
