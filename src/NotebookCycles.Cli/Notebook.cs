@@ -273,9 +273,17 @@ public sealed class Notebook
 
         meta["kernelspec"] ??= new JsonObject { ["display_name"] = ".NET (C#)", ["language"] = "C#", ["name"] = ".net-csharp" };
         meta["language_info"] ??= new JsonObject { ["name"] = "C#" };
+        bool needsIds = (root["nbformat"] is JsonValue major && major.TryGetValue(out int mj) && mj > 4)
+            || (root["nbformat"] is JsonValue m4 && m4.TryGetValue(out int four) && four == 4 && root["nbformat_minor"] is JsonValue minor && minor.TryGetValue(out int mn) && mn >= 5);
         for (int i = 0; i < Cells.Count; i++)
         {
             var cell = Cells[i];
+            if (needsIds && cells[i] is JsonObject withId && withId["id"] is null)
+            {
+                // nbformat 4.5 requires a cell id; a stable one keeps re-runs from changing the file.
+                withId["id"] = "cell-" + cell.Number.ToString(System.Globalization.CultureInfo.InvariantCulture);
+            }
+
             if (cell.Kind == CellKind.Code && executed.TryGetValue(cell.Number, out var result))
             {
                 var node = (JsonObject)cells[i]!;
