@@ -751,6 +751,13 @@ internal static class If97Core
             throw new NonConvergenceException("IAPWS-IF97: T(p, v) did not converge.");
         }
 
+        // As for the isochores: at the region 2/5 boundary (1073.15 K) v jumps slightly, so a second root can sit just
+        // above it; prefer the region-2 state when region 2 reaches the volume.
+        if (t > T25 && t < T25 + 1.0 && tLo < T25 && f.Evaluate(T25) >= 0 && Brent.TrySolve(ref f, tLo, T25, out double below, 1e-12))
+        {
+            t = below;
+        }
+
         state = SinglePhaseTP(t, p, liquidSide);
         return Fit.Ok;
     }
@@ -1008,6 +1015,14 @@ internal static class If97Core
         else if (!Brent.TrySolve(ref f, TMin, TMax, out t, 1e-11))
         {
             return false;
+        }
+
+        // Regions 2 and 5 meet at 1073.15 K with slightly different u and s, so just above the boundary the isochore
+        // can fall back below a value that region 2 reaches just below it: two roots within about 0.02 K. The state in
+        // the region that covers the lower temperature is the one the forward (T, p) model gives; prefer it.
+        if (t > T25 && t < T25 + 1.0 && f.Evaluate(T25) >= 0 && Brent.TrySolve(ref f, TMin, T25, out double below, 1e-11))
+        {
+            t = below;
         }
 
         if (SolveTY(t, v, true, out state) != Fit.Ok)

@@ -57,6 +57,23 @@ public sealed class IapwsIf97PropertyTests
         }, iter: 3000);
     }
 
+    [Theory]
+    [InlineData(59023d / 55, 1355156.72)] // found by the randomised test above (CsCheck seed 6PFkednUzhZ1)
+    [InlineData(1073.149, 0.1e6)]
+    [InlineData(1073.14, 10e6)]
+    [InlineData(1073.13, 40e6)]
+    public void States_just_below_the_region_2_and_5_boundary_round_trip_through_every_pair(double t, double p)
+    {
+        // Regions 2 and 5 meet at 1073.15 K with slightly different u and s (IAPWS R7-97(2012), the boundary is not
+        // exactly continuous), so an isochore can have a second root just above it; the region-2 state must be found.
+        var st = Steam.FromTP(t, p);
+        foreach (var back in new[] { Steam.FromTS(t, st.S), Steam.FromTV(t, st.V), Steam.FromPV(p, st.V), Steam.FromHS(st.H, st.S), Steam.FromVU(st.V, st.U), Steam.FromVS(st.V, st.S) })
+        {
+            Assert.Equal(t, back.T, 1e-9 * t);
+            Assert.Equal(p, back.P, 1e-7 * p);
+        }
+    }
+
     [Fact]
     public void Any_p_h_pair_gives_a_state_or_a_range_error()
     {
