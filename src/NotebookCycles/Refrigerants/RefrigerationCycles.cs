@@ -133,6 +133,25 @@ public static class RefrigerationCycles
             .Heat(backTo: "1");
     }
     /// <summary>
+    /// The high-side pressure that maximises the cooling COP of a transcritical cycle (<see cref="Transcritical"/>),
+    /// searched between <paramref name="lowest"/> and <paramref name="highest"/> with the sweep machinery's optimum
+    /// search (a scan, then golden section; it never leaves the interval). Below the optimum the gas-cooler outlet
+    /// enthalpy rises steeply and the refrigerating effect falls; above it the compressor work grows faster than the effect.
+    /// </summary>
+    public static NotebookCycles.Sweeps.OptimumResult OptimumHighSidePressure(ISaturationModel refrigerant, Temperature evaporating, Temperature gasCoolerOutlet, Pressure lowest, Pressure highest, VapourCompressionOptions? design = null, double relativeTolerance = 1e-7)
+    {
+        ArgumentNullException.ThrowIfNull(refrigerant);
+        var record = new CycleOptions { Record = false };
+        return NotebookCycles.Sweeps.Optimum.Maximize(
+            "high-side pressure (Pa)",
+            lowest.Pascals,
+            highest.Pascals,
+            p => Transcritical(refrigerant, evaporating, gasCoolerOutlet, Pressure.FromPascals(p), design, options: record),
+            r => r.Figures.CopCooling,
+            relativeTolerance: relativeTolerance);
+    }
+
+    /// <summary>
     /// Two-stage vapour compression with a flash tank (open flash intercooler): 1 = evaporator outlet (saturated vapour
     /// plus the superheat) → low-stage compressor to the intermediate pressure → 2 → mixing with the flash tank's
     /// saturated vapour → 3 → high-stage compressor → 4 → condenser → 5 (saturated liquid minus the subcooling) →

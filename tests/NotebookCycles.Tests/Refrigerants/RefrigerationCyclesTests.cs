@@ -110,6 +110,26 @@ public sealed class RefrigerationCyclesTests
     }
 
     [Fact]
+    public void Optimum_high_side_pressure_of_a_transcritical_co2_cycle_is_a_true_maximum()
+    {
+        // CO2 cycle, evaporating at −5 °C, gas cooler outlet 35 °C, compressor η = 0.7 (invented operating point).
+        var m = Refrigerant.R744;
+        var design = new VapourCompressionOptions { CompressorEfficiency = 0.7 };
+        var best = RefrigerationCycles.OptimumHighSidePressure(m, Temperature.FromDegreesCelsius(-5), Temperature.FromDegreesCelsius(35), Pressure.FromMegapascals(7.5), Pressure.FromMegapascals(14), design);
+        double cop(double p) => RefrigerationCycles.Transcritical(m, Temperature.FromDegreesCelsius(-5), Temperature.FromDegreesCelsius(35), Pressure.FromPascals(p), design).Figures.CopCooling;
+
+        Assert.InRange(best.Value, 7.6e6, 13.9e6);
+        Assert.False(best.ConstraintActive);
+        Assert.True(best.Objective >= cop(best.Value * 0.98));
+        Assert.True(best.Objective >= cop(best.Value * 1.02));
+        Assert.Equal(cop(best.Value), best.Objective, 1e-12);
+
+        // Rule of thumb for CO2 near a 35 °C gas-cooler outlet: the optimum lies between about 8.5 and 10 MPa
+        // (common practice, no source).
+        Assert.InRange(best.Value, 8.5e6, 10e6);
+    }
+
+    [Fact]
     public void Transcritical_requests_that_would_condense_are_refused()
     {
         var ex = Assert.Throws<CycleDefinitionException>(() => RefrigerationCycles.Transcritical(Refrigerant.R134a, Temperature.FromDegreesCelsius(-5), Temperature.FromDegreesCelsius(40), Pressure.FromMegapascals(5)));
