@@ -15,6 +15,13 @@ public sealed record VapourCompressionOptions
 
     /// <summary>Compressor isentropic efficiency, (0, 1]; default 1.</summary>
     public double CompressorEfficiency { get; init; } = 1.0;
+
+    /// <summary>
+    /// Effectiveness of a suction-line heat exchanger in [0, 1], or null for none: the suction vapour (state 1) is
+    /// heated towards the condenser outlet temperature (state 3) to state 1a, and the liquid cools from 3 to 3a before
+    /// the valve.
+    /// </summary>
+    public double? SuctionLineEffectiveness { get; init; }
 }
 
 /// <summary>Ready-made vapour-compression refrigeration and heat-pump cycles, solved through the steady-flow chain.</summary>
@@ -63,8 +70,19 @@ public static class RefrigerationCycles
         var pc = Pressure.FromPascals(refrigerant.SaturationPressure(tc));
         var chain = Cycle.SteadyFlow(title, refrigerant, options);
         chain = sh > 0 ? chain.Start("1", T: Temperature.FromKelvins(te + sh), p: pe) : chain.Start("1", p: pe, x: 1);
+        bool slhx = design.SuctionLineEffectiveness is not null;
+        if (slhx)
+        {
+            chain = chain.HeatInRegenerator("1a", hotInlet: "3", effectiveness: design.SuctionLineEffectiveness!.Value);
+        }
+
         chain = chain.Compress("2", toPressure: pc, efficiency: design.CompressorEfficiency);
         chain = sc > 0 ? chain.Condense("3", toTemperature: Temperature.FromKelvins(tc - sc)) : chain.Condense("3", toQuality: 0);
+        if (slhx)
+        {
+            chain = chain.CoolInRegenerator("3a", coldOutlet: "1a");
+        }
+
         return chain.Throttle("4", toPressure: pe).Heat(backTo: "1");
     }
 
@@ -296,6 +314,7 @@ internal sealed class FlashTankLiquidSpec(string label) : ProcessSpec(label)
 /// <param name="EvaporatingTemperature">Saturation temperature at p1, K.</param>
 /// <param name="CondensingTemperature">Saturation temperature at p2, K (for a transcritical cycle the gas-cooler outlet temperature T3).</param>
 /// <param name="CarnotCop">T_evap / (T_cond − T_evap), cooling.</param>
+/// <param name="SuctionSpecificVolume">Specific volume at the compressor inlet, m³/kg.</param>
 public sealed record VapourCompressionFigures(
     double RefrigeratingEffect,
     double CompressorWork,
@@ -306,8 +325,34 @@ public sealed record VapourCompressionFigures(
     double VolumetricCapacity,
     double EvaporatingTemperature,
     double CondensingTemperature,
-    double CarnotCop)
+    double CarnotCop,
+    double SuctionSpecificVolume)
 {
+    /// <summary>
+    /// Mass flow (kg/s) drawn by a compressor of swept volume rate <paramref name="displacement"/> (m³/s) at volumetric
+    /// efficiency <paramref name="volumetricEfficiency"/> in (0, 1]: η_v·V̇/v_suction.
+    /// </summary>
+    public double MassFlowFromDisplacement(double displacement, double volumetricEfficiency)
+    {
+        if (!(volumetricEfficiency > 0 && volumetricEfficiency <= 1))
+        {
+            throw new ArgumentOutOfRangeException(nameof(volumetricEfficiency), volumetricEfficiency, "The volumetric efficiency must lie in (0, 1].");
+        }
+
+        if (!(displacement > 0 && double.IsFinite(displacement)))
+        {
+            throw new ArgumentOutOfRangeException(nameof(displacement), displacement, "The displacement must be a positive finite number of m³/s.");
+        }
+
+        return volumetricEfficiency * displacement / SuctionSpecificVolume;
+    }
+
+    /// <summary>Refrigerant mass flow (kg/s) that gives the cooling capacity <paramref name="capacity"/>: Q / q_L.</summary>
+    public double MassFlowForCooling(UnitsNet.Power capacity) => (double)capacity.Watts / RefrigeratingEffect;
+
+    /// <summary>Refrigerant mass flow (kg/s) that gives the heating capacity <paramref name="capacity"/>: Q / (q_L + w).</summary>
+    public double MassFlowForHeating(UnitsNet.Power capacity) => (double)capacity.Watts / (RefrigeratingEffect + CompressorWork);
+
     /// <summary>The figures of a solved cycle whose model has a saturation line and whose states are labelled 1 to 4.</summary>
     public static VapourCompressionFigures From(CycleResult cycle)
     {
@@ -321,9 +366,12 @@ public sealed record VapourCompressionFigures(
         var s2 = cycle["2"].Point;
         var s3 = cycle["3"].Point;
         var s4 = cycle["4"].Point;
-        double qL = s1.H - s4.H, w = s2.H - s1.H;
+
+        // With a suction-line heat exchanger the compressor draws state 1a; the evaporator still ends at 1.
+        var suction = cycle.States.Any(s => s.Label == "1a") ? cycle["1a"].Point : s1;
+        double qL = s1.H - s4.H, w = s2.H - suction.H;
         double te = model.SaturationTemperature(s1.P);
         double tc = s2.P < model.CriticalPoint.P ? model.SaturationTemperature(s2.P) : s3.T; // transcritical: the gas-cooler outlet
-        return new VapourCompressionFigures(qL, w, qL / w, (s2.H - s3.H) / w, s2.T, s2.P / s1.P, qL / s1.V, te, tc, te / (tc - te));
+        return new VapourCompressionFigures(qL, w, qL / w, (s2.H - s3.H) / w, s2.T, s2.P / s1.P, qL / suction.V, te, tc, te / (tc - te), suction.V);
     }
 }

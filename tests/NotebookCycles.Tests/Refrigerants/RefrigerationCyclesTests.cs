@@ -110,6 +110,40 @@ public sealed class RefrigerationCyclesTests
     }
 
     [Fact]
+    public void Suction_line_heat_exchanger_balances_and_vanishes_at_zero_effectiveness()
+    {
+        var te = Temperature.FromDegreesCelsius(-10);
+        var tc = Temperature.FromDegreesCelsius(45);
+        var plain = RefrigerationCycles.VapourCompression(Refrigerant.R134a, te, tc, new VapourCompressionOptions { CompressorEfficiency = 0.75 });
+        var none = RefrigerationCycles.VapourCompression(Refrigerant.R134a, te, tc, new VapourCompressionOptions { CompressorEfficiency = 0.75, SuctionLineEffectiveness = 0 });
+        var slhx = RefrigerationCycles.VapourCompression(Refrigerant.R134a, te, tc, new VapourCompressionOptions { CompressorEfficiency = 0.75, SuctionLineEffectiveness = 0.6 });
+
+        Assert.Equal(plain.Figures.CopCooling, none.Figures.CopCooling, 1e-9);
+
+        // Energy balance of the exchanger: h1a − h1 = h3 − h3a (equal flows), and ε = (h1a − h1)/(h(T3, p1) − h1).
+        double h1 = slhx["1"].Point.H, h1a = slhx["1a"].Point.H, h3 = slhx["3"].Point.H, h3a = slhx["3a"].Point.H;
+        Assert.Equal(h1a - h1, h3 - h3a, 1e-9 * h3);
+        double hStar = Refrigerant.R134a.FromTP(slhx["3"].Point.T, slhx["1"].Point.P).H;
+        Assert.Equal(0.6, (h1a - h1) / (hStar - h1), 1e-9);
+        var f = VapourCompressionFigures.From(slhx);
+        Assert.Equal(h1 - slhx["4"].Point.H, f.RefrigeratingEffect, 1e-9);
+        Assert.Equal(slhx["2"].Point.H - h1a, f.CompressorWork, 1e-9);
+        Assert.True(f.RefrigeratingEffect > VapourCompressionFigures.From(plain).RefrigeratingEffect);
+    }
+
+    [Fact]
+    public void Mass_flow_for_a_capacity_is_capacity_over_the_specific_effect()
+    {
+        var cycle = RefrigerationCycles.VapourCompression(Refrigerant.R134a, Temperature.FromDegreesCelsius(-5), Temperature.FromDegreesCelsius(45), new VapourCompressionOptions { CompressorEfficiency = 0.75 });
+        var f = VapourCompressionFigures.From(cycle);
+        double qL = cycle["1"].Point.H - cycle["4"].Point.H, w = cycle["2"].Point.H - cycle["1"].Point.H;
+        Assert.Equal(10e3 / qL, f.MassFlowForCooling(UnitsNet.Power.FromKilowatts(10)), 1e-12);
+        Assert.Equal(10e3 / (qL + w), f.MassFlowForHeating(UnitsNet.Power.FromKilowatts(10)), 1e-12);
+        Assert.Equal(0.9 * 2e-3 / cycle["1"].Point.V, f.MassFlowFromDisplacement(2e-3, 0.9), 1e-12);
+        Assert.Throws<ArgumentOutOfRangeException>(() => f.MassFlowFromDisplacement(2e-3, 1.2));
+    }
+
+    [Fact]
     public void Optimum_high_side_pressure_of_a_transcritical_co2_cycle_is_a_true_maximum()
     {
         // CO2 cycle, evaporating at −5 °C, gas cooler outlet 35 °C, compressor η = 0.7 (invented operating point).
