@@ -128,6 +128,9 @@ public static class NotebookRunner
         var runs = new List<CellRun>();
         var values = new List<CapturedValue>();
         int count = 0;
+
+        // A long sweep shown with NotebookSweep.Over updates its progress line while the cell runs: echo it live.
+        using var live = kernel.KernelEvents.Subscribe(new SweepProgressEcho());
         for (int i = 0; i < code.Count; i++)
         {
             cancellation.ThrowIfCancellationRequested();
@@ -287,5 +290,37 @@ public static class NotebookRunner
         }
 
         return new JsonObject { ["output_type"] = "error", ["ename"] = name, ["evalue"] = failed.Message, ["traceback"] = traceback };
+    }
+}
+
+/// <summary>Writes a notebook sweep's progress line to standard error as it is updated, so a terminal shows long sweeps moving.</summary>
+/// <remarks>
+/// The C# kernel redirects <see cref="Console"/> while a cell runs (what a cell prints becomes its output), so this
+/// writes to the process's own standard error stream.
+/// </remarks>
+internal sealed class SweepProgressEcho : IObserver<KernelEvent>
+{
+    private static readonly Lazy<TextWriter> StandardError = new(() => new StreamWriter(Console.OpenStandardError()) { AutoFlush = true });
+
+    public void OnCompleted()
+    {
+    }
+
+    public void OnError(Exception error)
+    {
+    }
+
+    public void OnNext(KernelEvent value)
+    {
+        var view = value switch
+        {
+            DisplayedValueUpdated u => u.Value as NotebookCycles.Interactive.SweepProgressView,
+            DisplayedValueProduced d => d.Value as NotebookCycles.Interactive.SweepProgressView,
+            _ => null,
+        };
+        if (view is not null)
+        {
+            StandardError.Value.WriteLine("  " + view);
+        }
     }
 }
