@@ -294,7 +294,8 @@ internal static class RecordExport
         json.WriteEndObject();
     }
 
-    private static void Number(Utf8JsonWriter json, string name, double value)
+    /// <summary>A finite number, or null for NaN and infinities (JSON has no NaN).</summary>
+    internal static void Number(Utf8JsonWriter json, string name, double value)
     {
         if (double.IsFinite(value))
         {

@@ -29,13 +29,13 @@ public static class RecordJson
         json.WriteString("kind", "state");
         json.WriteString("label", state.Label);
         json.WriteString("model", state.Model.Name);
-        Number(json, "T_K", p.T);
-        Number(json, "p_Pa", p.P);
-        Number(json, "v_m3_per_kg", p.V);
-        Number(json, "u_J_per_kg", p.U);
-        Number(json, "h_J_per_kg", p.H);
-        Number(json, "s_J_per_kgK", p.S);
-        Number(json, "x", p.X);
+        RecordExport.Number(json, "T_K", p.T);
+        RecordExport.Number(json, "p_Pa", p.P);
+        RecordExport.Number(json, "v_m3_per_kg", p.V);
+        RecordExport.Number(json, "u_J_per_kg", p.U);
+        RecordExport.Number(json, "h_J_per_kg", p.H);
+        RecordExport.Number(json, "s_J_per_kgK", p.S);
+        RecordExport.Number(json, "x", p.X);
         json.WriteString("phase", p.Phase.ToString());
         json.WriteEndObject();
     }
@@ -66,9 +66,9 @@ public static class RecordJson
         json.WriteStartObject();
         json.WriteString("kind", "optimum");
         json.WriteString("parameter", optimum.Parameter);
-        Number(json, "value", optimum.Value);
-        Number(json, "tolerance", optimum.Tolerance);
-        Number(json, "objective", optimum.Objective);
+        RecordExport.Number(json, "value", optimum.Value);
+        RecordExport.Number(json, "tolerance", optimum.Tolerance);
+        RecordExport.Number(json, "objective", optimum.Objective);
         json.WriteBoolean("constraint_active", optimum.ConstraintActive);
         json.WriteNumber("evaluations", optimum.Evaluations);
         json.WritePropertyName("cycle");
@@ -97,8 +97,8 @@ public static class RecordJson
         foreach (var point in sweep.Points)
         {
             json.WriteStartObject();
-            Number(json, "x", point.X);
-            Number(json, "y", point.Y);
+            RecordExport.Number(json, "x", point.X);
+            RecordExport.Number(json, "y", point.Y);
             json.WriteBoolean("succeeded", point.Succeeded);
             if (point.FailureReason is null)
             {
@@ -114,7 +114,7 @@ public static class RecordJson
                 json.WriteStartObject("figures");
                 foreach (var (name, get) in SweepResult.FigureColumns)
                 {
-                    Number(json, name, get(f));
+                    RecordExport.Number(json, name, get(f));
                 }
 
                 json.WriteEndObject();
@@ -128,17 +128,5 @@ public static class RecordJson
         }
 
         json.WriteEndArray();
-    }
-
-    private static void Number(Utf8JsonWriter json, string name, double value)
-    {
-        if (double.IsFinite(value))
-        {
-            json.WriteNumber(name, value);
-        }
-        else
-        {
-            json.WriteNull(name);
-        }
     }
 }

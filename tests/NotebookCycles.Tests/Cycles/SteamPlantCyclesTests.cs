@@ -19,22 +19,16 @@ public sealed class SteamPlantCyclesTests
     {
         foreach (var line in File.ReadLines(Path.Combine(AppContext.BaseDirectory, "ReferenceData", "rankine_crosscheck.csv")))
         {
-            string rest;
-            if (line.StartsWith('"' + prefix, StringComparison.Ordinal))
-            {
-                rest = line[(line.IndexOf('"', 1) + 2)..];
-            }
-            else if (line.StartsWith(prefix, StringComparison.Ordinal))
-            {
-                rest = line[(line.IndexOf(',', StringComparison.Ordinal) + 1)..];
-            }
-            else
+            if (line.StartsWith('#') || !line.Contains(prefix, StringComparison.Ordinal))
             {
                 continue;
             }
 
-            var f = rest.Split(',');
-            return (double.Parse(f[0], CultureInfo.InvariantCulture), double.Parse(f[1], CultureInfo.InvariantCulture) * 1000, double.Parse(f[2], CultureInfo.InvariantCulture));
+            var f = NotebookCycles.Tests.Water.ReferenceCsv.Split(line);
+            if (f[0].StartsWith(prefix, StringComparison.Ordinal))
+            {
+                return (double.Parse(f[1], CultureInfo.InvariantCulture), double.Parse(f[2], CultureInfo.InvariantCulture) * 1000, double.Parse(f[3], CultureInfo.InvariantCulture));
+            }
         }
 
         throw new InvalidOperationException("no reference row " + prefix);

@@ -54,37 +54,11 @@ public sealed record RefrigerantRow(int Line, string Fluid, string Kind, double 
                 continue;
             }
 
-            var cells = Split(raw);
+            var cells = NotebookCycles.Tests.Water.ReferenceCsv.Split(raw);
             static double D(string s) => s.Length == 0 ? double.NaN : double.Parse(s, CultureInfo.InvariantCulture);
             rows.Add(new RefrigerantRow(line, cells[0], cells[1], D(cells[2]), D(cells[3]), D(cells[4]), cells[5], cells[6], cells[7], cells[8], cells[3]));
         }
 
         return rows;
-    }
-
-    private static List<string> Split(string line)
-    {
-        var cells = new List<string>();
-        var current = new System.Text.StringBuilder();
-        bool quoted = false;
-        foreach (char c in line)
-        {
-            if (c == '"')
-            {
-                quoted = !quoted;
-            }
-            else if (c == ',' && !quoted)
-            {
-                cells.Add(current.ToString());
-                current.Clear();
-            }
-            else
-            {
-                current.Append(c);
-            }
-        }
-
-        cells.Add(current.ToString());
-        return cells;
     }
 }
